@@ -1,0 +1,28 @@
+import { roles, type Role } from './roles.ts';
+
+const everyone = roles;
+
+/**
+ * The one declared role × action table. The API's `requireRole` middleware and the web app's
+ * navigation both read it, and the access-control tests are generated from it, so the three
+ * cannot drift apart.
+ */
+export const permissions = {
+  /** List users, invite, change role, deactivate. */
+  'users:manage': ['admin'],
+  /** Read the messages held by the local mail catcher (development and demo only). */
+  'mail:read': ['admin'],
+  /** Read sites, strings and datasheets (owners only for their own sites). */
+  'assets:read': everyone,
+  /** Create and change sites, strings and datasheets. */
+  'assets:write': ['admin', 'dispatcher'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Action = keyof typeof permissions;
+export const actions = Object.keys(permissions) as Action[];
+
+/** Whether a role may take an action. */
+export function can(role: Role | null | undefined, action: Action): boolean {
+  if (!role) return false;
+  return (permissions[action] as readonly Role[]).includes(role);
+}

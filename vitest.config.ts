@@ -1,0 +1,27 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        test: {
+          name: 'unit',
+          include: ['packages/*/src/**/*.test.ts', 'apps/api/src/**/*.test.ts', 'apps/web/src/**/*.test.{ts,tsx}'],
+          environment: 'node',
+        },
+      },
+      {
+        test: {
+          name: 'api',
+          include: ['tests/api/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/api/global-setup.ts'],
+          setupFiles: ['tests/api/setup-env.ts'],
+          fileParallelism: false,
+          testTimeout: 20000,
+          hookTimeout: 60000,
+        },
+      },
+    ],
+  },
+});
