@@ -1,4 +1,5 @@
 import { defineConfig } from 'vitest/config';
+import { apiTestEnv } from './tests/api/test-env.ts';
 
 export default defineConfig({
   test: {
@@ -17,6 +18,7 @@ export default defineConfig({
           environment: 'node',
           globalSetup: ['tests/api/global-setup.ts'],
           setupFiles: ['tests/api/setup-env.ts'],
+          env: { ...apiTestEnv },
           fileParallelism: false,
           testTimeout: 20000,
           hookTimeout: 60000,

@@ -1,0 +1,28 @@
+import { Op } from 'sequelize';
+import { hashPassword } from '../src/lib/passwords.ts';
+import { User, sequelize } from '../src/models/index.ts';
+import { DEMO_PASSWORD, demoUsers } from './demo-users.ts';
+
+export type SeedResult = { status: 'seeded' | 'skipped'; reason?: string; users: number };
+
+/**
+ * Idempotent demo seed. It refuses to touch a database that holds accounts that are not demo
+ * accounts, unless `force` is given.
+ */
+export async function seedDemo({ force = false } = {}): Promise<SeedResult> {
+  const foreign = await User.count({ where: { isDemo: false } });
+  if (foreign > 0 && !force) {
+    return { status: 'skipped', reason: `the database holds ${foreign} non-demo account(s)`, users: 0 };
+  }
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  await sequelize.transaction(async (transaction) => {
+    const existing = await User.findAll({ where: { email: { [Op.in]: demoUsers.map((u) => u.email) } }, transaction });
+    const byEmail = new Map(existing.map((u) => [u.email, u]));
+    for (const u of demoUsers) {
+      const row = byEmail.get(u.email);
+      if (row) await row.update({ name: u.name, role: u.role, isActive: true, isDemo: true }, { transaction });
+      else await User.create({ ...u, passwordHash, isDemo: true, lastSignInAt: null }, { transaction });
+    }
+  });
+  return { status: 'seeded', users: demoUsers.length };
+}

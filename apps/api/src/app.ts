@@ -1,0 +1,131 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import session, { type Store } from 'express-session';
+import connectSessionSequelize from 'connect-session-sequelize';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import { csrfSync } from 'csrf-sync';
+import { env } from './config/env.ts';
+import { logger } from './lib/logger.ts';
+import { passport } from './lib/passport.ts';
+import { sequelize } from './models/index.ts';
+import { requestId } from './middleware/request-id.ts';
+import { errorHandler, notFoundApi } from './middleware/error-handler.ts';
+import { healthRouter } from './routes/health.routes.ts';
+import { authRouter } from './routes/auth.routes.ts';
+import { usersRouter } from './routes/users.routes.ts';
+import { mailRouter } from './routes/mail.routes.ts';
+
+const SequelizeStore = connectSessionSequelize(session.Store);
+
+export type AppOptions = {
+  /** Serve the built web app from this folder (SPA fallback); omitted or missing → API only. */
+  webDist?: string | null;
+};
+
+/** Sessions live in MariaDB so that any number of API processes share them. */
+export function createSessionStore(): Store {
+  return new SequelizeStore({
+    db: sequelize,
+    table: 'Session',
+    checkExpirationInterval: 15 * 60 * 1000,
+    expiration: env.SESSION_MAX_AGE_HOURS * 60 * 60 * 1000,
+    extendDefaultFields: (defaults: { data: string; expires: Date }, s: { passport?: { user?: number } }) => ({
+      data: defaults.data,
+      expires: defaults.expires,
+      userId: s.passport?.user ?? null,
+    }),
+  }) as unknown as Store;
+}
+
+/** Builds the Express app; never listens (tests import it). */
+export function createApp(options: AppOptions = {}): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', env.TRUST_PROXY ? 1 : false);
+  app.use(requestId);
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (req) => (req as express.Request).id,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
+    }),
+  );
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          frameSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+
+  app.use('/api/health', healthRouter());
+
+  app.use('/api', express.json({ limit: '100kb' }));
+  app.use(
+    '/api',
+    session({
+      name: 'sf.sid',
+      secret: env.SESSION_SECRET,
+      store: createSessionStore(),
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      proxy: env.TRUST_PROXY,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: env.COOKIE_SECURE === 'auto' ? 'auto' : env.COOKIE_SECURE === 'true',
+        maxAge: env.SESSION_MAX_AGE_HOURS * 60 * 60 * 1000,
+        path: '/',
+      },
+    }),
+  );
+  app.use('/api', passport.initialize());
+  app.use('/api', passport.session());
+
+  const { csrfSynchronisedProtection, generateToken } = csrfSync({
+    getTokenFromRequest: (req) => req.get('x-csrf-token'),
+  });
+  app.use('/api', csrfSynchronisedProtection);
+
+  app.use('/api/auth', authRouter(generateToken));
+  app.use('/api/users', usersRouter());
+  app.use('/api/mail', mailRouter());
+  app.use('/api', notFoundApi);
+
+  const webDist = options.webDist === undefined ? env.WEB_DIST : options.webDist;
+  if (webDist && fs.existsSync(path.join(webDist, 'index.html'))) {
+    app.use(
+      express.static(webDist, {
+        index: false,
+        setHeaders: (res, file) => {
+          if (file.includes(`${path.sep}assets${path.sep}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+        },
+      }),
+    );
+    app.get(/^(?!\/api\/).*/, (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(path.join(webDist, 'index.html'));
+    });
+  }
+
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,52 @@
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { z } from 'zod';
+
+/** The repository root, so that default paths work from any working directory. */
+export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../..');
+
+const boolish = z
+  .enum(['true', 'false', '1', '0', 'yes', 'no'])
+  .transform((v) => v === 'true' || v === '1' || v === 'yes');
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(1).max(65535).default(8080),
+  APP_URL: z.url().optional(),
+  DB_HOST: z.string().default('127.0.0.1'),
+  DB_PORT: z.coerce.number().int().min(1).max(65535).default(3307),
+  DB_NAME: z.string().regex(/^[a-z0-9_]+$/, 'DB_NAME: lower-case letters, digits and _ only').default('stringfield'),
+  DB_USER: z.string().default('stringfield'),
+  DB_PASSWORD: z.string().default('stringfield-local'),
+  DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+  SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must be at least 32 characters').optional(),
+  SESSION_MAX_AGE_HOURS: z.coerce.number().min(1).max(24 * 30).default(12),
+  COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),
+  TRUST_PROXY: boolish.default(false),
+  SMTP_URL: z.string().default('smtp://127.0.0.1:1025'),
+  MAIL_FROM: z.string().default('Stringfield <no-reply@stringfield.test>'),
+  MAIL_CATCHER_DIR: z.string().default(path.join(repoRoot, '.data/mail')),
+  WEB_DIST: z.string().default(path.join(repoRoot, 'apps/web/dist')),
+  LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  LOGIN_RATE_WINDOW_MIN: z.coerce.number().int().min(1).default(15),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  DEMO_SEED: boolish.default(true),
+});
+
+export type Env = z.infer<typeof envSchema> & { APP_URL: string; SESSION_SECRET: string };
+
+function parseEnv(source: NodeJS.ProcessEnv): Env {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n');
+    throw new Error(`Stringfield cannot start: the environment is not valid.\n${lines}`);
+  }
+  const e = parsed.data;
+  const secret = e.SESSION_SECRET ?? (e.NODE_ENV === 'production' ? undefined : 'stringfield-development-session-secret-change-me');
+  if (!secret) throw new Error('Stringfield cannot start: set SESSION_SECRET (32+ characters) in production.');
+  return { ...e, APP_URL: e.APP_URL ?? `http://${e.HOST}:${e.PORT}`, SESSION_SECRET: secret };
+}
+
+/** Configuration, parsed once from the environment; the only place that reads `process.env`. */
+export const env: Env = parseEnv(process.env);

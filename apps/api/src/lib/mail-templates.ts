@@ -1,0 +1,44 @@
+import { env } from '../config/env.ts';
+import type { OutgoingMail } from './mailer.ts';
+import { escapeHtml } from './html.ts';
+
+function layout(title: string, paragraphs: string[], action: { label: string; url: string }): string {
+  const body = paragraphs.map((p) => `<p style="margin:0 0 16px">${escapeHtml(p)}</p>`).join('');
+  return `<!doctype html><html><body style="margin:0;background:#f6f4ee;font-family:Arial,sans-serif;color:#13201d">
+<div style="max-width:560px;margin:0 auto;padding:24px">
+<p style="font-size:20px;font-weight:bold;color:#0e4b4f;margin:0 0 24px">Stringfield</p>
+<h1 style="font-size:22px;margin:0 0 16px">${escapeHtml(title)}</h1>${body}
+<p style="margin:24px 0"><a href="${escapeHtml(action.url)}" style="background:#a8480f;color:#ffffff;padding:12px 20px;border-radius:6px;text-decoration:none;font-weight:bold">${escapeHtml(action.label)}</a></p>
+<p style="font-size:13px;color:#44524f">If the button does not work, copy this address into your browser:<br>${escapeHtml(action.url)}</p>
+</div></body></html>`;
+}
+
+export function passwordResetMail(to: string, name: string, token: string): OutgoingMail {
+  const url = `${env.APP_URL}/reset-password?token=${encodeURIComponent(token)}`;
+  const lines = [
+    `Hello ${name},`,
+    'Someone (hopefully you) asked to reset the password of your Stringfield account.',
+    'The link below works once and expires in 1 hour. If you did not ask for it, ignore this message: your password stays as it is.',
+  ];
+  return {
+    to,
+    subject: 'Reset your Stringfield password',
+    text: `${lines.join('\n\n')}\n\nReset your password: ${url}\n`,
+    html: layout('Reset your password', lines, { label: 'Choose a new password', url }),
+  };
+}
+
+export function invitationMail(to: string, name: string, roleLabel: string, token: string): OutgoingMail {
+  const url = `${env.APP_URL}/reset-password?token=${encodeURIComponent(token)}&invite=1`;
+  const lines = [
+    `Hello ${name},`,
+    `You have been invited to Stringfield as ${roleLabel}.`,
+    'Choose a password to finish setting up your account. The link works once and expires in 7 days.',
+  ];
+  return {
+    to,
+    subject: 'You are invited to Stringfield',
+    text: `${lines.join('\n\n')}\n\nSet your password: ${url}\n`,
+    html: layout('Welcome to Stringfield', lines, { label: 'Set your password', url }),
+  };
+}

@@ -1,0 +1,4 @@
+import { createRequire } from 'node:module';
+
+const pkg = createRequire(import.meta.url)('../../package.json') as { version: string };
+export const version = pkg.version;

@@ -1,0 +1,188 @@
+import {
+  flexRender,
+  getCoreRowModel,
+  useReactTable,
+  type ColumnDef,
+  type OnChangeFn,
+  type RowData,
+  type SortingState,
+} from '@tanstack/react-table';
+import type { ReactNode } from 'react';
+import { cn } from '@/lib/cn';
+import { Icon } from './icon';
+import { LoadingRegion, Skeleton } from './skeleton';
+
+declare module '@tanstack/react-table' {
+  // eslint-disable-next-line @typescript-eslint/no-unused-vars -- the generics must match TanStack's declaration to merge
+  interface ColumnMeta<TData extends RowData, TValue> {
+    /** The column's name as words, used as the label on the phone card layout. */
+    label?: string;
+    /** Extra classes for the header and body cells of this column. */
+    className?: string;
+    /** Leave this column's label off the phone card (e.g. the title line or an actions column). */
+    isCardTitle?: boolean;
+  }
+}
+
+type DataTableProps<T> = {
+  /** Column definitions, made once at module scope with createColumnHelper. */
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- TanStack column value types vary per column
+  columns: ColumnDef<T, any>[];
+  data: T[];
+  /** Names the table for screen readers. */
+  caption: string;
+  getRowId: (row: T) => string;
+  /** Server-side sorting: the table only shows and reports it. */
+  sorting?: SortingState;
+  onSortingChange?: OnChangeFn<SortingState>;
+  isLoading?: boolean;
+  /** Greys the rows while a new page or sort order is on its way. */
+  isFetching?: boolean;
+  emptyState?: ReactNode;
+  skeletonRows?: number;
+};
+
+/**
+ * The one generic table. Sorting and paging are the server's job (manual mode) so the state can live
+ * in the URL. Below 768 px each row becomes a card of label/value pairs, readable on a phone without
+ * sideways scrolling.
+ */
+export function DataTable<T>({
+  columns,
+  data,
+  caption,
+  getRowId,
+  sorting = [],
+  onSortingChange,
+  isLoading = false,
+  isFetching = false,
+  emptyState,
+  skeletonRows = 6,
+}: DataTableProps<T>) {
+  // eslint-disable-next-line react-hooks/incompatible-library -- TanStack Table returns a mutable instance; this component is not compiler-memoized
+  const table = useReactTable({
+    data,
+    columns,
+    getRowId: (row) => getRowId(row),
+    getCoreRowModel: getCoreRowModel(),
+    manualSorting: true,
+    manualPagination: true,
+    enableMultiSort: false,
+    enableSortingRemoval: false,
+    state: { sorting },
+    onSortingChange,
+  });
+
+  if (isLoading) {
+    return (
+      <LoadingRegion label={`Loading ${caption.toLowerCase()}`} className="overflow-hidden rounded-card border border-line bg-surface">
+        <div className="hidden gap-4 border-b border-line bg-sunken px-4 py-3 md:flex">
+          {columns.map((_, index) => (
+            <Skeleton key={index} className="h-5 flex-1" />
+          ))}
+        </div>
+        {Array.from({ length: skeletonRows }, (_, index) => (
+          <div key={index} className="flex flex-col gap-2 border-b border-line px-4 py-4 last:border-b-0 md:flex-row md:gap-4">
+            {columns.map((__, cell) => (
+              <Skeleton key={cell} className={cn('h-5 md:flex-1', cell === 0 ? 'w-1/2' : 'w-1/3 md:w-auto')} />
+            ))}
+          </div>
+        ))}
+      </LoadingRegion>
+    );
+  }
+
+  if (data.length === 0 && emptyState) return <>{emptyState}</>;
+
+  const rows = table.getRowModel().rows;
+
+  return (
+    <div aria-busy={isFetching || undefined} className={cn('transition-opacity', isFetching && 'opacity-60')}>
+      {/* Desktop and tablet: a real table. */}
+      <div className="hidden overflow-hidden rounded-card border border-line bg-surface shadow-card md:block">
+        <table className="w-full border-collapse text-left">
+          <caption className="sr-only">{caption}</caption>
+          <thead className="bg-sunken">
+            {table.getHeaderGroups().map((headerGroup) => (
+              <tr key={headerGroup.id}>
+                {headerGroup.headers.map((header) => {
+                  const sorted = header.column.getIsSorted();
+                  const canSort = header.column.getCanSort() && Boolean(onSortingChange);
+                  const label = flexRender(header.column.columnDef.header, header.getContext());
+                  return (
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : canSort ? 'none' : undefined}
+                      className={cn('border-b-2 border-edge/50 px-4 py-2 text-sm font-semibold text-ink-muted', header.column.columnDef.meta?.className)}
+                    >
+                      {header.isPlaceholder ? null : canSort ? (
+                        <button
+                          type="button"
+                          onClick={header.column.getToggleSortingHandler()}
+                          className="-mx-2 inline-flex min-h-touch items-center gap-1.5 rounded-control px-2 hover:bg-paper hover:text-ink"
+                        >
+                          {label}
+                          <Icon
+                            name={sorted === 'asc' ? 'chevronUp' : sorted === 'desc' ? 'chevronDown' : 'sort'}
+                            className={cn('size-4', !sorted && 'opacity-60')}
+                          />
+                          {/* Rely on aria-sort for the state; this tells what a press will do. */}
+                          <span className="sr-only">{sorted === 'asc' ? ', sort descending' : ', sort ascending'}</span>
+                        </button>
+                      ) : (
+                        label
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {rows.map((row) => (
+              <tr key={row.id} className="border-b border-line last:border-b-0 hover:bg-paper/70">
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className={cn('px-4 py-3 align-middle', cell.column.columnDef.meta?.className)}>
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+
+      {/* Phone: one card per row. */}
+      <ul aria-label={caption} className="flex flex-col gap-3 md:hidden">
+        {rows.map((row) => {
+          const cells = row.getVisibleCells();
+          const render = (cell: (typeof cells)[number]) => flexRender(cell.column.columnDef.cell, cell.getContext());
+          const titleCells = cells.filter((cell) => cell.column.columnDef.meta?.isCardTitle);
+          const labelledCells = cells.filter((cell) => !cell.column.columnDef.meta?.isCardTitle && cell.column.columnDef.meta?.label);
+          const restCells = cells.filter((cell) => !cell.column.columnDef.meta?.isCardTitle && !cell.column.columnDef.meta?.label);
+          return (
+            <li key={row.id} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4 shadow-card">
+              {titleCells.map((cell) => (
+                <div key={cell.id}>{render(cell)}</div>
+              ))}
+              {labelledCells.length > 0 ? (
+                <dl className="flex flex-col gap-2">
+                  {labelledCells.map((cell) => (
+                    <div key={cell.id} className="flex items-baseline justify-between gap-4">
+                      <dt className="text-sm text-ink-muted">{cell.column.columnDef.meta?.label}</dt>
+                      <dd className="text-right">{render(cell)}</dd>
+                    </div>
+                  ))}
+                </dl>
+              ) : null}
+              {restCells.map((cell) => (
+                <div key={cell.id}>{render(cell)}</div>
+              ))}
+            </li>
+          );
+        })}
+      </ul>
+    </div>
+  );
+}

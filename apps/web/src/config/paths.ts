@@ -1,0 +1,57 @@
+/**
+ * Route patterns (for the router) and typed builders (for links). Every in-app URL is made here,
+ * so a renamed route is one edit and a link can't drift from its route.
+ */
+export const routes = {
+  home: '/',
+  signIn: '/sign-in',
+  forgotPassword: '/forgot-password',
+  resetPassword: '/reset-password',
+  people: '/people',
+  outbox: '/outbox',
+  outboxMessage: '/outbox/:messageId',
+} as const;
+
+type SearchValue = string | number | boolean | null | undefined;
+
+/** Builds `?a=1&b=2` from an object, leaving out empty values; returns '' when nothing is left. */
+export function toSearch(params: Record<string, SearchValue>): string {
+  const search = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) {
+    if (value === undefined || value === null || value === '' || value === false) continue;
+    search.set(key, String(value));
+  }
+  const text = search.toString();
+  return text ? `?${text}` : '';
+}
+
+/**
+ * Accepts a `?next=` target only if it stays inside this app: a path starting with a single `/`.
+ * Anything else (absolute URLs, `//evil.example`, `/\evil`, the auth pages themselves) falls back home,
+ * so a crafted sign-in link can't bounce a technician to another site.
+ */
+export function safeNext(next: string | null | undefined): string {
+  if (!next) return routes.home;
+  if (!next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return routes.home;
+  if ([...next].some((ch) => ch.charCodeAt(0) < 0x20 || ch === '\\')) return routes.home;
+  const pathname = next.split(/[?#]/)[0] ?? '';
+  const authPages: string[] = [routes.signIn, routes.forgotPassword, routes.resetPassword];
+  if (authPages.includes(pathname)) return routes.home;
+  return next;
+}
+
+export const paths = {
+  home: () => routes.home,
+  /** Sign-in page; `next` is where to go afterwards (path + search + hash of the page asked for). */
+  signIn: (next?: string) => {
+    const target = next ? safeNext(next) : routes.home;
+    return `${routes.signIn}${toSearch({ next: target === routes.home ? undefined : target })}`;
+  },
+  forgotPassword: () => routes.forgotPassword,
+  resetPassword: (token: string, options: { isInvite?: boolean } = {}) =>
+    `${routes.resetPassword}${toSearch({ token, invite: options.isInvite ? 1 : undefined })}`,
+  people: (search: Record<string, SearchValue> = {}) => `${routes.people}${toSearch(search)}`,
+  outbox: (search: { page?: number } = {}) => `${routes.outbox}${toSearch({ page: search.page === 1 ? undefined : search.page })}`,
+  outboxMessage: (messageId: string, search: { page?: number } = {}) =>
+    `${routes.outbox}/${encodeURIComponent(messageId)}${toSearch({ page: search.page === 1 ? undefined : search.page })}`,
+} as const;

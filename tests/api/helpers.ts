@@ -1,0 +1,83 @@
+import supertest from 'supertest';
+import type { Express } from 'express';
+import { expect } from 'vitest';
+import { createApp } from '../../apps/api/src/app.ts';
+import { sequelize } from '../../apps/api/src/models/index.ts';
+import { seedDemo } from '../../apps/api/seeders/demo.ts';
+import { DEMO_PASSWORD } from '../../apps/api/seeders/demo-users.ts';
+import { readCaughtMail, type CaughtMail } from '../../scripts/mail-catcher.ts';
+import { apiTestEnv } from './test-env.ts';
+
+export { DEMO_PASSWORD };
+
+export const demoEmail = {
+  admin: 'admin@stringfield.test',
+  dispatcher: 'dispatcher@stringfield.test',
+  technician: 'tech@stringfield.test',
+  supervisor: 'supervisor@stringfield.test',
+  owner: 'owner@stringfield.test',
+} as const;
+
+let shared: Express | undefined;
+/** One app instance per test file (it never listens; supertest binds an ephemeral port per request). */
+export function app(): Express {
+  shared ??= createApp({ webDist: null });
+  return shared;
+}
+
+/** Empty every table the suites write to and put the demo crew back. */
+export async function resetDatabase(): Promise<void> {
+  await sequelize.query('SET FOREIGN_KEY_CHECKS = 0');
+  for (const table of ['sessions', 'password_tokens', 'mail_outbox', 'rate_limit_hits', 'users']) {
+    await sequelize.query(`TRUNCATE TABLE \`${table}\``);
+  }
+  await sequelize.query('SET FOREIGN_KEY_CHECKS = 1');
+  await seedDemo();
+}
+
+export type Agent = ReturnType<typeof supertest.agent> & { csrf: string };
+
+/** A cookie-keeping client with a CSRF token for its session. */
+export async function newAgent(on: Express = app()): Promise<Agent> {
+  const agent = supertest.agent(on) as Agent;
+  const res = await agent.get('/api/auth/csrf').expect(200);
+  agent.csrf = (res.body as { csrfToken: string }).csrfToken;
+  return agent;
+}
+
+/** Refresh the agent's CSRF token (the session id, and so the token, changes at sign-in). */
+export async function refreshCsrf(agent: Agent): Promise<void> {
+  const res = await agent.get('/api/auth/csrf').expect(200);
+  agent.csrf = (res.body as { csrfToken: string }).csrfToken;
+}
+
+export async function signIn(email: string, password = DEMO_PASSWORD, on: Express = app()): Promise<Agent> {
+  const agent = await newAgent(on);
+  await agent.post('/api/auth/login').set('x-csrf-token', agent.csrf).send({ email, password }).expect(200);
+  await refreshCsrf(agent);
+  return agent;
+}
+
+/** Wait until the mail catcher holds a message to `to` matching `subject` received at or after `since` (ms). */
+export async function waitForMail(to: string, subject: RegExp, since = 0, timeoutMs = 10_000): Promise<CaughtMail> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const all = await readCaughtMail(apiTestEnv.MAIL_CATCHER_DIR);
+    const hit = all
+      .reverse()
+      .find((m) => m.to.includes(to) && subject.test(m.subject) && Date.parse(m.receivedAt) >= since);
+    if (hit) return hit;
+    if (Date.now() > deadline) throw new Error(`No mail to ${to} matching ${subject} within ${timeoutMs} ms`);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
+export function tokenFromLink(text: string): string {
+  const match = /token=([A-Za-z0-9_-]+)/.exec(text);
+  expect(match, 'mail carries a link with a token').not.toBeNull();
+  return match![1]!;
+}
+
+export function errorOf(res: { body: unknown }) {
+  return (res.body as { error: { code: string; message: string; fields?: Record<string, string> } }).error;
+}
