@@ -36,7 +36,7 @@ export function createSessionStore(): Store {
       expires: defaults.expires,
       userId: s.passport?.user ?? null,
     }),
-  }) as unknown as Store;
+  });
 }
 
 /** Builds the Express app; never listens (tests import it). */
@@ -98,7 +98,7 @@ export function createApp(options: AppOptions = {}): Express {
     }),
   );
   app.use('/api', passport.initialize());
-  app.use('/api', passport.session());
+  app.use('/api', passport.session() as express.RequestHandler);
 
   const { csrfSynchronisedProtection, generateToken } = csrfSync({
     getTokenFromRequest: (req) => req.get('x-csrf-token'),

@@ -22,7 +22,7 @@ function shutdown(signal: string) {
   stopSweep();
   server.close(() => {
     closeMailer();
-    sequelize.close().finally(() => process.exit(0));
+    void sequelize.close().finally(() => process.exit(0));
   });
   setTimeout(() => process.exit(1), 10_000).unref();
 }

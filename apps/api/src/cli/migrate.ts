@@ -9,7 +9,7 @@ try {
     const done = await migrator.up();
     process.stdout.write(`[stringfield] Migrations: ${done.length ? done.map((m) => m.name).join(', ') : 'up to date'}\n`);
   } else if (cmd === 'down') {
-    const done = flag === '--to' ? await migrator.down({ to: value === '0' ? 0 : (value as string) }) : await migrator.down();
+    const done = flag === '--to' ? await migrator.down({ to: value === '0' ? 0 : (value ?? 0) }) : await migrator.down();
     process.stdout.write(`[stringfield] Rolled back: ${done.map((m) => m.name).join(', ') || 'nothing'}\n`);
   } else {
     throw new Error(`Unknown command ${cmd}: use up or down`);

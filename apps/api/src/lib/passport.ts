@@ -1,9 +1,8 @@
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import type { SessionUser } from '@stringfield/shared';
 import { findActiveSessionUser } from '../services/auth.service.ts';
 
-passport.serializeUser<number>((user, done) => done(null, (user as SessionUser).id));
+passport.serializeUser<number>((user, done) => done(null, user.id));
 
 // A deactivated or deleted account resolves to "signed out" on its very next request.
 passport.deserializeUser<number>((id, done) => {

@@ -41,7 +41,7 @@ export const notFoundApi: RequestHandler = (req, _res, next) => {
 
 /** The one error handler: every failure leaves as `{ error: { code, message, fields?, requestId } }`. */
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
-  const rid = String(req.id ?? 'unknown');
+  const rid = typeof req.id === 'string' || typeof req.id === 'number' ? String(req.id) : 'unknown';
   if (res.headersSent) {
     logger.error({ err, requestId: rid }, 'error after headers were sent');
     return;
