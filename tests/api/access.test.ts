@@ -13,7 +13,7 @@ const routes: Array<{ method: 'get'; path: string; action: Action }> = [
 const agents = new Map<string, Agent>();
 beforeAll(async () => {
   await resetDatabase();
-  for (const role of roles) agents.set(role, await signIn(demoEmail[role === 'technician' ? 'technician' : role]));
+  for (const role of roles) agents.set(role, await signIn(demoEmail[role]));
 });
 
 describe.each(routes)('$method $path needs $action', ({ method, path, action }) => {

@@ -3,6 +3,7 @@ import type { Express } from 'express';
 import { expect } from 'vitest';
 import { createApp } from '../../apps/api/src/app.ts';
 import { sequelize } from '../../apps/api/src/models/index.ts';
+import { mailIdle } from '../../apps/api/src/lib/mailer.ts';
 import { seedDemo } from '../../apps/api/seeders/demo.ts';
 import { DEMO_PASSWORD } from '../../apps/api/seeders/demo-users.ts';
 import { readCaughtMail, type CaughtMail } from '../../scripts/mail-catcher.ts';
@@ -16,6 +17,7 @@ export const demoEmail = {
   technician: 'tech@stringfield.test',
   supervisor: 'supervisor@stringfield.test',
   owner: 'owner@stringfield.test',
+  otherOwner: 'calder.owner@stringfield.test',
 } as const;
 
 let shared: Express | undefined;
@@ -25,14 +27,29 @@ export function app(): Express {
   return shared;
 }
 
-/** Empty every table the suites write to and put the demo crew back. */
-export async function resetDatabase(): Promise<void> {
+/** Empty every table the suites write to and put the demo crew (and, when asked, the demo plant) back. */
+export async function resetDatabase({ plant = false } = {}): Promise<void> {
+  // A delivery still running from the previous test would write to re-used outbox ids after TRUNCATE.
+  await mailIdle();
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 0');
-  for (const table of ['sessions', 'password_tokens', 'mail_outbox', 'rate_limit_hits', 'users']) {
+  for (const table of [
+    'sessions',
+    'password_tokens',
+    'mail_outbox',
+    'rate_limit_hits',
+    'pv_strings',
+    'combiner_boxes',
+    'inverters',
+    'inverter_models',
+    'module_models',
+    'site_owners',
+    'sites',
+    'users',
+  ]) {
     await sequelize.query(`TRUNCATE TABLE \`${table}\``);
   }
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 1');
-  await seedDemo();
+  await seedDemo({ plant });
 }
 
 export type Agent = ReturnType<typeof supertest.agent> & { csrf: string };

@@ -9,6 +9,7 @@ export const demoUsers: Array<{ email: string; name: string; role: Role }> = [
   { email: 'tech@stringfield.test', name: 'Demo Technician', role: 'technician' },
   { email: 'supervisor@stringfield.test', name: 'Demo Supervisor', role: 'supervisor' },
   { email: 'owner@stringfield.test', name: 'Demo Owner (Fenwick Moor Holdings)', role: 'owner' },
+  { email: 'calder.owner@stringfield.test', name: 'Demo Owner (Calder Bay Logistics)', role: 'owner' },
   { email: 'rosa.quill@stringfield.test', name: 'Rosa Quill', role: 'technician' },
   { email: 'tomas.brenn@stringfield.test', name: 'Tomas Brenn', role: 'technician' },
   { email: 'ada.merrow@stringfield.test', name: 'Ada Merrow', role: 'technician' },

@@ -2,20 +2,21 @@ import { Op } from 'sequelize';
 import { hashPassword } from '../src/lib/passwords.ts';
 import { User, sequelize } from '../src/models/index.ts';
 import { DEMO_PASSWORD, demoUsers } from './demo-users.ts';
+import { seedDemoPlant } from './demo-plant.ts';
 
-export type SeedResult = { status: 'seeded' | 'skipped'; reason?: string; users: number };
+export type SeedResult = { status: 'seeded' | 'skipped'; reason?: string; users: number; sites?: number; strings?: number };
 
 /**
  * Idempotent demo seed. It refuses to touch a database that holds accounts that are not demo
  * accounts, unless `force` is given.
  */
-export async function seedDemo({ force = false } = {}): Promise<SeedResult> {
+export async function seedDemo({ force = false, plant = true } = {}): Promise<SeedResult> {
   const foreign = await User.count({ where: { isDemo: false } });
   if (foreign > 0 && !force) {
     return { status: 'skipped', reason: `the database holds ${foreign} non-demo account(s)`, users: 0 };
   }
   const passwordHash = await hashPassword(DEMO_PASSWORD);
-  await sequelize.transaction(async (transaction) => {
+  const created = await sequelize.transaction(async (transaction) => {
     const existing = await User.findAll({ where: { email: { [Op.in]: demoUsers.map((u) => u.email) } }, transaction });
     const byEmail = new Map(existing.map((u) => [u.email, u]));
     for (const u of demoUsers) {
@@ -23,6 +24,7 @@ export async function seedDemo({ force = false } = {}): Promise<SeedResult> {
       if (row) await row.update({ name: u.name, role: u.role, isActive: true, isDemo: true }, { transaction });
       else await User.create({ ...u, passwordHash, isDemo: true, lastSignInAt: null }, { transaction });
     }
+    return plant ? seedDemoPlant(transaction) : { sites: 0, strings: 0 };
   });
-  return { status: 'seeded', users: demoUsers.length };
+  return { status: 'seeded', users: demoUsers.length, ...created };
 }

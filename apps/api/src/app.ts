@@ -16,6 +16,14 @@ import { healthRouter } from './routes/health.routes.ts';
 import { authRouter } from './routes/auth.routes.ts';
 import { usersRouter } from './routes/users.routes.ts';
 import { mailRouter } from './routes/mail.routes.ts';
+import {
+  combinerBoxesRouter,
+  inverterModelsRouter,
+  invertersRouter,
+  moduleModelsRouter,
+  sitesRouter,
+  stringsRouter,
+} from './routes/assets.routes.ts';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
 
@@ -108,6 +116,12 @@ export function createApp(options: AppOptions = {}): Express {
   app.use('/api/auth', authRouter(generateToken));
   app.use('/api/users', usersRouter());
   app.use('/api/mail', mailRouter());
+  app.use('/api/sites', sitesRouter());
+  app.use('/api/strings', stringsRouter());
+  app.use('/api/module-models', moduleModelsRouter());
+  app.use('/api/inverter-models', inverterModelsRouter());
+  app.use('/api/inverters', invertersRouter());
+  app.use('/api/combiner-boxes', combinerBoxesRouter());
   app.use('/api', notFoundApi);
 
   const webDist = options.webDist === undefined ? env.WEB_DIST : options.webDist;

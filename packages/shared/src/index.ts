@@ -6,3 +6,4 @@ export * from './auth.ts';
 export * from './mail.ts';
 export * from './health.ts';
 export * from './module-spec.ts';
+export * from './assets.ts';

@@ -33,9 +33,21 @@ export async function queueMail(mail: OutgoingMail, transaction?: Transaction): 
     { toAddress: mail.to, subject: mail.subject, textBody: mail.text, htmlBody: mail.html ?? null, lastError: null, claimedBy: null, claimedUntil: null, sentAt: null },
     { transaction },
   );
-  const kick = () => void deliverDueMail().catch((err: unknown) => logger.warn({ err }, 'mail delivery failed'));
+  const kick = () => void track(deliverDueMail()).catch((err: unknown) => logger.warn({ err }, 'mail delivery failed'));
   if (transaction) transaction.afterCommit(kick);
   else kick();
+}
+
+const inFlight = new Set<Promise<unknown>>();
+function track<T>(p: Promise<T>): Promise<T> {
+  inFlight.add(p);
+  void p.finally(() => inFlight.delete(p)).catch(() => undefined);
+  return p;
+}
+
+/** Resolves once no delivery started by this process is still running (used by tests and shutdown). */
+export async function mailIdle(): Promise<void> {
+  while (inFlight.size > 0) await Promise.allSettled([...inFlight]);
 }
 
 /**
@@ -89,7 +101,7 @@ export async function deliverDueMail(limit = 20): Promise<number> {
 /** Retry queued mail every `intervalMs`; returns a function that stops the sweep. */
 export function startMailSweep(intervalMs = 30_000): () => void {
   const timer = setInterval(() => {
-    deliverDueMail().catch((err: unknown) => logger.warn({ err }, 'mail sweep failed'));
+    track(deliverDueMail()).catch((err: unknown) => logger.warn({ err }, 'mail sweep failed'));
   }, intervalMs);
   timer.unref();
   return () => clearInterval(timer);

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
+import multer from 'multer';
 import {
   BaseError,
   ConnectionError,
@@ -68,6 +69,16 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   }
   if (e?.type === 'encoding.unsupported' || e?.type === 'charset.unsupported') {
     res.status(415).json(body('VALIDATION_FAILED', 'Send the request body as UTF-8 JSON.', rid));
+    return;
+  }
+  if (err instanceof multer.MulterError) {
+    const tooBig = err.code === 'LIMIT_FILE_SIZE';
+    const message = tooBig
+      ? 'The file is too large (at most 10 MB). Split it into smaller files.'
+      : err.code === 'LIMIT_FILE_COUNT' || err.code === 'LIMIT_UNEXPECTED_FILE'
+        ? 'Send one file, in the form field "file".'
+        : `The upload was refused: ${err.message}.`;
+    res.status(tooBig ? 413 : 400).json(body(tooBig ? 'PAYLOAD_TOO_LARGE' : 'VALIDATION_FAILED', message, rid));
     return;
   }
   if (e?.code === 'EBADCSRFTOKEN') {

@@ -4,14 +4,43 @@ import { PasswordToken } from './password-token.model.ts';
 import { Session } from './session.model.ts';
 import { MailOutbox } from './mail-outbox.model.ts';
 import { RateLimitHit } from './rate-limit-hit.model.ts';
+import { Site, SiteOwner } from './site.model.ts';
+import { ModuleModel } from './module-model.model.ts';
+import { InverterModel } from './inverter-model.model.ts';
+import { Inverter } from './inverter.model.ts';
+import { CombinerBox } from './combiner-box.model.ts';
+import { PvString } from './pv-string.model.ts';
 
-User.initModel(sequelize);
-PasswordToken.initModel(sequelize);
-Session.initModel(sequelize);
-MailOutbox.initModel(sequelize);
-RateLimitHit.initModel(sequelize);
+for (const model of [User, PasswordToken, Session, MailOutbox, RateLimitHit, Site, SiteOwner, ModuleModel, InverterModel, Inverter, CombinerBox, PvString]) {
+  model.initModel(sequelize);
+}
 
 User.hasMany(PasswordToken, { foreignKey: 'userId', as: 'passwordTokens' });
 PasswordToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
-export { sequelize, User, PasswordToken, Session, MailOutbox, RateLimitHit };
+Site.hasMany(Inverter, { foreignKey: 'siteId', as: 'inverters' });
+Inverter.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
+Inverter.belongsTo(InverterModel, { foreignKey: 'inverterModelId', as: 'inverterModel' });
+Site.hasMany(CombinerBox, { foreignKey: 'siteId', as: 'combinerBoxes' });
+Site.hasMany(PvString, { foreignKey: 'siteId', as: 'strings' });
+PvString.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
+PvString.belongsTo(Inverter, { foreignKey: 'inverterId', as: 'inverter' });
+PvString.belongsTo(CombinerBox, { foreignKey: 'combinerBoxId', as: 'combinerBox' });
+PvString.belongsTo(ModuleModel, { foreignKey: 'moduleModelId', as: 'moduleModel' });
+Site.hasMany(SiteOwner, { foreignKey: 'siteId', as: 'owners' });
+
+export {
+  sequelize,
+  User,
+  PasswordToken,
+  Session,
+  MailOutbox,
+  RateLimitHit,
+  Site,
+  SiteOwner,
+  ModuleModel,
+  InverterModel,
+  Inverter,
+  CombinerBox,
+  PvString,
+};
