@@ -17,7 +17,11 @@ export function assertModuleSpec(module: ModuleSpec): void {
   assertNumber(module.betaVocPctPerC, 'module.betaVocPctPerC', { min: -2, lessThan: 0 });
   assertNumber(module.gammaPmaxPctPerC, 'module.gammaPmaxPctPerC', { min: -2, max: 0 });
   assertNumber(module.cellsInSeries, 'module.cellsInSeries', { integer: true, min: 1 });
-  assertNumber(module.bypassDiodes, 'module.bypassDiodes', { integer: true, min: 1, max: module.cellsInSeries });
+  assertNumber(module.bypassDiodes, 'module.bypassDiodes', {
+    integer: true,
+    min: 1,
+    max: module.cellsInSeries,
+  });
   if (module.cellsInSeries % module.bypassDiodes !== 0) {
     throw new RangeError(
       `module.cellsInSeries (${module.cellsInSeries}) must split evenly over module.bypassDiodes (${module.bypassDiodes})`,

@@ -1,9 +1,9 @@
 import { assertModuleSpec } from './assert-module-spec.ts';
 import { assertNumber } from './assert-number.ts';
-import { fitSingleDiode } from './fit-single-diode.ts';
+import { deSotoReferenceFit } from './desoto-reference-fit.ts';
 import { PHYSICS } from './physical-constants.ts';
-import { singleDiodeParamsAt } from './single-diode-params-at.ts';
 import { solveSingleDiode } from './solve-single-diode.ts';
+import { translateDeSoto } from './translate-desoto.ts';
 import type { CurvePoints, ModuleSpec } from './types.ts';
 
 /** Input of {@link expectedString}. */
@@ -36,11 +36,18 @@ export function expectedString(input: ExpectedStringInput): CurvePoints {
   assertNumber(moduleTempC, 'moduleTempC', { min: -60, max: 120 });
   const dT = moduleTempC - PHYSICS.stcCellTempC;
   const gRatio = irradianceWm2 / PHYSICS.stcIrradianceWm2;
-  const fit = fitSingleDiode(module);
-  const aV = (fit.modifiedIdealityV * (moduleTempC + PHYSICS.zeroCelsiusK)) / (PHYSICS.stcCellTempC + PHYSICS.zeroCelsiusK);
+  const fit = deSotoReferenceFit(module);
+  const aV =
+    (fit.modifiedIdealityV * (moduleTempC + PHYSICS.zeroCelsiusK)) /
+    (PHYSICS.stcCellTempC + PHYSICS.zeroCelsiusK);
   const moduleVocV = module.vocV * (1 + (module.betaVocPctPerC / 100) * dT) + aV * Math.log(gRatio);
   const iscA = module.iscA * gRatio * (1 + (module.alphaIscPctPerC / 100) * dT);
-  const mpp = solveSingleDiode(singleDiodeParamsAt(module, { irradianceWm2, cellTempC: moduleTempC }));
+  const mpp = solveSingleDiode(
+    translateDeSoto(fit, (module.alphaIscPctPerC / 100) * module.iscA, {
+      irradianceWm2,
+      cellTempC: moduleTempC,
+    }),
+  );
   return {
     vocV: modulesInSeries * moduleVocV,
     iscA,

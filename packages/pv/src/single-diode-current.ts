@@ -9,7 +9,13 @@ import type { SingleDiodeParams } from './types.ts';
  * validated here (hot path); use `assertSingleDiodeParams` at the boundary.
  */
 export function singleDiodeCurrent(params: SingleDiodeParams, voltageV: number): number {
-  const { photoCurrentA: il, saturationCurrentA: i0, seriesOhm: rs, shuntOhm: rsh, modifiedIdealityV: a } = params;
+  const {
+    photoCurrentA: il,
+    saturationCurrentA: i0,
+    seriesOhm: rs,
+    shuntOhm: rsh,
+    modifiedIdealityV: a,
+  } = params;
   const gsh = 1 / rsh;
   if (rs === 0) return il - i0 * Math.expm1(voltageV / a) - voltageV * gsh;
   const denom = 1 + rs * gsh;

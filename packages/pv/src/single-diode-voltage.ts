@@ -9,7 +9,13 @@ import type { SingleDiodeParams } from './types.ts';
  * I must stay below IL + I0). Parameters are not validated here (hot path).
  */
 export function singleDiodeVoltage(params: SingleDiodeParams, currentA: number): number {
-  const { photoCurrentA: il, saturationCurrentA: i0, seriesOhm: rs, shuntOhm: rsh, modifiedIdealityV: a } = params;
+  const {
+    photoCurrentA: il,
+    saturationCurrentA: i0,
+    seriesOhm: rs,
+    shuntOhm: rsh,
+    modifiedIdealityV: a,
+  } = params;
   if (rsh === Infinity) return a * Math.log1p((il - currentA) / i0) - currentA * rs;
   const gsh = 1 / rsh;
   const lnPsi = Math.log(i0 / (gsh * a)) + (il + i0 - currentA) / (gsh * a);

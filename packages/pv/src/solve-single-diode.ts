@@ -22,7 +22,10 @@ export function solveSingleDiode(params: SingleDiodeParams): CurvePoints {
     const dIdV = -1 / (1 / g + rs);
     return i + v * dIdV;
   };
-  const vmpV = findRoot(dPdV, 0, vocV, 1e-12 * Math.max(1, vocV));
+  // Vmp lies above Voc/2 for any curve with a fill factor above 0.5; start there when the sign allows.
+  const half = vocV / 2;
+  const lo = dPdV(half) > 0 ? half : 0;
+  const vmpV = findRoot(dPdV, lo, vocV, 1e-12 * Math.max(1, vocV));
   const impA = singleDiodeCurrent(params, vmpV);
   return { iscA, vocV, impA, vmpV, pmpW: vmpV * impA };
 }

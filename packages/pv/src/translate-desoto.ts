@@ -30,8 +30,10 @@ export function translateDeSoto(
   const eg = egRef * (1 + PHYSICS.siliconBandgapPerK * dT);
   const ratio = tcK / trefK;
   return {
-    photoCurrentA: (condition.irradianceWm2 / PHYSICS.stcIrradianceWm2) * (reference.photoCurrentA + alphaIscAPerC * dT),
-    saturationCurrentA: reference.saturationCurrentA * ratio ** 3 * Math.exp(egRef / (k * trefK) - eg / (k * tcK)),
+    photoCurrentA:
+      (condition.irradianceWm2 / PHYSICS.stcIrradianceWm2) * (reference.photoCurrentA + alphaIscAPerC * dT),
+    saturationCurrentA:
+      reference.saturationCurrentA * ratio ** 3 * Math.exp(egRef / (k * trefK) - eg / (k * tcK)),
     seriesOhm: reference.seriesOhm,
     shuntOhm: (reference.shuntOhm * PHYSICS.stcIrradianceWm2) / condition.irradianceWm2,
     modifiedIdealityV: reference.modifiedIdealityV * ratio,
