@@ -1,3 +1,4 @@
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 import { apiTestEnv } from './tests/api/test-env.ts';
 
@@ -5,6 +6,7 @@ export default defineConfig({
   test: {
     projects: [
       {
+        resolve: { alias: { '@': fileURLToPath(new URL('./apps/web/src', import.meta.url)) } },
         test: {
           name: 'unit',
           include: ['packages/*/src/**/*.test.ts', 'apps/api/src/**/*.test.ts', 'apps/web/src/**/*.test.{ts,tsx}'],

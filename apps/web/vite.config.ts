@@ -28,6 +28,16 @@ export default defineConfig({
     // Never inline assets as data: URIs into scripts or the HTML; the strict CSP serves files only.
     assetsInlineLimit: 0,
     modulePreload: { polyfill: false },
-    sourcemap: true,
+    sourcemap: false,
+    rolldownOptions: {
+      output: {
+        // React and the router change rarely: a separate file stays cached across our releases.
+        codeSplitting: {
+          groups: [
+            { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler|react-router)[\\/]/, priority: 20 },
+          ],
+        },
+      },
+    },
   },
 });

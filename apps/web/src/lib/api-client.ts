@@ -1,6 +1,6 @@
 import { apiErrorBodySchema, csrfResponseSchema } from '@stringfield/shared';
 import type { z } from 'zod';
-import { env } from '@/config/env';
+import { env } from '../config/env';
 
 /** Codes the client adds to the server's closed set: the request never got an answer, or a strange one. */
 export type ClientErrorCode = 'NETWORK' | 'BAD_RESPONSE';

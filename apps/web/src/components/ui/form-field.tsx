@@ -87,12 +87,12 @@ export function Select({ className, id, children, ...props }: ComponentProps<'se
         id={id ?? field?.id}
         aria-describedby={field?.describedBy}
         aria-invalid={field?.isInvalid || undefined}
-        className={cn(controlClasses, 'appearance-none pr-10', className)}
+        className={cn(controlClasses, 'appearance-none pr-9', className)}
         {...props}
       >
         {children}
       </select>
-      <Icon name="chevronDown" className="pointer-events-none absolute top-1/2 right-3 -translate-y-1/2 text-ink-muted" />
+      <Icon name="chevronDown" className="pointer-events-none absolute top-1/2 right-2.5 -translate-y-1/2 text-ink-muted" />
     </div>
   );
 }

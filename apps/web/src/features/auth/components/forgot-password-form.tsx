@@ -42,7 +42,7 @@ export function ForgotPasswordForm() {
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <div aria-live="assertive">{errors.root?.message ? <Alert tone="fail">{errors.root.message}</Alert> : null}</div>
+      <div aria-live="assertive" className="empty:hidden">{errors.root?.message ? <Alert tone="fail">{errors.root.message}</Alert> : null}</div>
       <FormField label="E-mail" hint="The address you sign in with." error={errors.email?.message}>
         <Input type="email" autoComplete="email" inputMode="email" autoCapitalize="none" spellCheck={false} {...register('email')} />
       </FormField>

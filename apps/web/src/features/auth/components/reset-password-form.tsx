@@ -60,7 +60,7 @@ export function ResetPasswordForm({
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <div aria-live="assertive">
+      <div aria-live="assertive" className="empty:hidden">
         {errors.root?.message ? (
           <Alert tone="fail" title={isLinkProblem ? 'This link no longer works' : undefined}>
             <p>{errors.root.message}</p>

@@ -7,7 +7,7 @@ import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { FormField, Input } from '@/components/ui/form-field';
 import { paths } from '@/config/paths';
-import { isApiError } from '@/lib/api-client';
+import { genericMessage, isApiError } from '@/lib/api-client';
 import { splitServerErrors } from '@/lib/form-errors';
 import { useSignIn } from '../api/sign-in';
 
@@ -24,7 +24,11 @@ function describeSignInError(error: unknown): { title: string; detail: string } 
       detail: 'Your administrator has switched this account off. Ask them to reactivate it; resetting the password will not help.',
     };
   if (error.status === 429)
-    return { title: 'Too many sign-in attempts', detail: 'For safety, sign-in is paused for a short while. Wait a few minutes, then try again.' };
+    return {
+      title: 'Too many sign-in attempts',
+      // The server says how long the pause lasts; keep its words when it sent some.
+      detail: error.message && error.message !== genericMessage(429) ? error.message : 'For safety, sign-in is paused for a short while. Wait a few minutes, then try again.',
+    };
   return null;
 }
 
@@ -57,7 +61,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: SessionUser) => 
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <div aria-live="assertive">
+      <div aria-live="assertive" className="empty:hidden">
         {formError ? (
           <Alert tone="fail" title={formError.title}>
             {formError.detail}

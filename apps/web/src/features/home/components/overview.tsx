@@ -37,7 +37,11 @@ export function Overview({ user, actions }: { user: SessionUser; actions?: React
         <p className="text-sm font-semibold tracking-wide text-brand uppercase">Today</p>
         <h1 className="text-2xl font-bold sm:text-3xl">Hello, {user.name}</h1>
         <p className="text-ink-muted">
-          Signed in as <strong className="text-ink">{roleLabels[user.role]}</strong> · <span className="break-all">{user.email}</span>
+          Signed in as <strong className="text-ink">{roleLabels[user.role]}</strong>
+          <span className="block [overflow-wrap:anywhere] sm:inline">
+            <span aria-hidden="true" className="hidden sm:inline"> · </span>
+            {user.email}
+          </span>
         </p>
       </header>
       <EmptyState icon={empty.icon} title={empty.title} description={empty.description} action={actions} />

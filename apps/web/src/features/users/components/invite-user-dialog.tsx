@@ -56,10 +56,10 @@ export function InviteUserDialog({ isOpen, onClose }: { isOpen: boolean; onClose
       isOpen={isOpen}
       onClose={close}
       title="Invite a person"
-      description="They get an e-mail with a link to choose their password. The link expires, and can be sent again by inviting them afresh."
+      description="They get an e-mail with a link to choose their password, then they can sign in."
     >
       <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-        <div aria-live="assertive">{errors.root?.message ? <Alert tone="fail">{errors.root.message}</Alert> : null}</div>
+        <div aria-live="assertive" className="empty:hidden">{errors.root?.message ? <Alert tone="fail">{errors.root.message}</Alert> : null}</div>
         <FormField label="Full name" error={errors.name?.message}>
           <Input autoComplete="off" {...register('name')} />
         </FormField>

@@ -60,7 +60,7 @@ function ManageUserBody({ user, isSelf, onClose }: { user: User; isSelf: boolean
         <span className="text-ink-muted">{roleLabels[user.role]}</span>
       </div>
 
-      <div aria-live="assertive">
+      <div aria-live="assertive" className="empty:hidden">
         {update.error ? (
           <Alert tone="fail" title="That change was not saved">
             {update.error.message}
@@ -74,11 +74,8 @@ function ManageUserBody({ user, isSelf, onClose }: { user: User; isSelf: boolean
         </Alert>
       ) : (
         <>
-          <section aria-labelledby="manage-role" className="flex flex-col gap-3">
-            <h3 id="manage-role" className="text-lg font-semibold">
-              Role
-            </h3>
-            <FormField label="Role" hint="Takes effect the next time their page loads.">
+          <section aria-label="Role" className="flex flex-col gap-3">
+            <FormField label={<span className="text-lg">Role</span>} hint="Takes effect the next time their page loads.">
               <Select value={role} onChange={(event) => setRole(event.target.value as Role)}>
                 {roles.map((option) => (
                   <option key={option} value={option}>

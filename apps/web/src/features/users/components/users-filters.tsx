@@ -3,11 +3,23 @@ import { useEffect, useRef, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormField, Input, Select } from '@/components/ui/form-field';
 import { Icon } from '@/components/ui/icon';
-import type { UserStatusFilter } from '../lib/list-params';
+import type { UserSort, UserStatusFilter } from '../lib/list-params';
 
 const statusLabels: Record<UserStatusFilter, string> = { all: 'Everyone', active: 'Active only', inactive: 'Deactivated only' };
 
-type Filters = { q: string; role: Role | undefined; status: UserStatusFilter };
+/* Sorting lives here as well as on the table headers: a phone shows cards, which have no headers. */
+const sortLabels: Record<UserSort, string> = {
+  name: 'Name A–Z',
+  '-name': 'Name Z–A',
+  email: 'E-mail A–Z',
+  '-email': 'E-mail Z–A',
+  role: 'Role A–Z',
+  '-role': 'Role Z–A',
+  '-createdAt': 'Newest first',
+  createdAt: 'Oldest first',
+};
+
+type Filters = { q: string; role: Role | undefined; status: UserStatusFilter; sort: UserSort };
 
 /** Search, role and status filters; the search waits for a pause in typing before it asks the server. */
 export function UsersFilters({ value, onChange }: { value: Filters; onChange: (next: Partial<Filters>) => void }) {
@@ -35,14 +47,14 @@ export function UsersFilters({ value, onChange }: { value: Filters; onChange: (n
       <form
         role="search"
         aria-label="Filter people"
-        className="mb-5 grid gap-4 rounded-card border border-line bg-surface p-4 shadow-card sm:grid-cols-2 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)_auto] lg:items-end"
+        className="mb-5 grid grid-cols-2 gap-x-3 gap-y-4 rounded-card border border-line bg-surface p-4 shadow-card sm:gap-x-4 lg:grid-cols-[minmax(0,1.6fr)_repeat(3,minmax(0,1fr))_auto] lg:items-end"
         onSubmit={(event) => {
           event.preventDefault();
           window.clearTimeout(timer.current);
           onChange({ q: query });
         }}
       >
-        <FormField label="Search" className="sm:col-span-2 lg:col-span-1">
+        <FormField label="Search" className="col-span-2 lg:col-span-1">
           <div className="relative">
             <Icon name="search" className="pointer-events-none absolute top-1/2 left-3 -translate-y-1/2 text-ink-muted" />
             <Input
@@ -71,6 +83,15 @@ export function UsersFilters({ value, onChange }: { value: Filters; onChange: (n
             {(Object.keys(statusLabels) as UserStatusFilter[]).map((status) => (
               <option key={status} value={status}>
                 {statusLabels[status]}
+              </option>
+            ))}
+          </Select>
+        </FormField>
+        <FormField label="Sort by">
+          <Select value={value.sort} onChange={(event) => onChange({ sort: event.target.value as UserSort })}>
+            {(Object.keys(sortLabels) as UserSort[]).map((sort) => (
+              <option key={sort} value={sort}>
+                {sortLabels[sort]}
               </option>
             ))}
           </Select>

@@ -27,7 +27,7 @@ function NameCell({ user }: { user: User }) {
           You
         </Badge>
       ) : null}
-      <span className="block break-all text-sm text-ink-muted md:hidden">{user.email}</span>
+      <span className="block text-sm [overflow-wrap:anywhere] text-ink-muted">{user.email}</span>
     </div>
   );
 }
@@ -45,18 +45,13 @@ const column = createColumnHelper<User>();
 
 const columns = [
   column.accessor('name', {
-    header: 'Name',
+    header: 'Name and e-mail',
     cell: (info) => <NameCell user={info.row.original} />,
     meta: { isCardTitle: true },
   }),
-  column.accessor('email', {
-    header: 'E-mail',
-    cell: (info) => <span className="break-all">{info.getValue()}</span>,
-    meta: { className: 'hidden md:table-cell' },
-  }),
   column.accessor('role', {
     header: 'Role',
-    cell: (info) => roleLabels[info.getValue()],
+    cell: (info) => <span className="whitespace-nowrap">{roleLabels[info.getValue()]}</span>,
     meta: { label: 'Role' },
   }),
   column.display({
@@ -66,14 +61,14 @@ const columns = [
     meta: { label: 'Status' },
   }),
   column.accessor('lastSignInAt', {
-    header: 'Last signed in',
+    header: 'Last sign-in',
     enableSorting: false,
-    cell: (info) => <span className="readings">{formatDay(info.getValue())}</span>,
-    meta: { label: 'Last signed in' },
+    cell: (info) => <span className="readings whitespace-nowrap">{formatDay(info.getValue())}</span>,
+    meta: { label: 'Last sign-in' },
   }),
   column.accessor('createdAt', {
     header: 'Added',
-    cell: (info) => <span className="readings">{formatDay(info.getValue())}</span>,
+    cell: (info) => <span className="readings whitespace-nowrap">{formatDay(info.getValue())}</span>,
     meta: { label: 'Added' },
   }),
   column.display({

@@ -1,0 +1,31 @@
+import { ButtonLink } from '@/components/ui/button';
+import { Icon } from '@/components/ui/icon';
+import { MyWork } from '@/features/home/components/my-work';
+import { Overview } from '@/features/home/components/overview';
+import { navItemsFor } from '../nav';
+import { useSessionUser } from '../session';
+
+/** "Today": technicians get their phone-first work list; every other role an overview. */
+export function HomeRoute() {
+  const user = useSessionUser();
+  if (user.role === 'technician') return <MyWork user={user} />;
+
+  // Shortcuts are the role's own navigation, minus Today itself.
+  const shortcuts = navItemsFor(user.role).filter((item) => !item.isExact);
+  return (
+    <Overview
+      user={user}
+      actions={
+        shortcuts.length > 0 ? (
+          <div className="flex flex-wrap justify-center gap-3">
+            {shortcuts.map((item, index) => (
+              <ButtonLink key={item.to} to={item.to} variant={index === 0 ? 'primary' : 'secondary'}>
+                <Icon name={item.icon} /> {item.label}
+              </ButtonLink>
+            ))}
+          </div>
+        ) : undefined
+      }
+    />
+  );
+}

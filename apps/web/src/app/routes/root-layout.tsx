@@ -1,0 +1,10 @@
+import { Outlet, ScrollRestoration } from 'react-router';
+
+export function RootLayout() {
+  return (
+    <>
+      <ScrollRestoration />
+      <Outlet />
+    </>
+  );
+}

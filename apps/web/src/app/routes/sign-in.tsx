@@ -1,0 +1,29 @@
+import { Navigate, useNavigate, useSearchParams } from 'react-router';
+import { Alert } from '@/components/ui/alert';
+import { safeNext } from '@/config/paths';
+import { useMe } from '@/features/auth/api/get-me';
+import { SignInForm } from '@/features/auth/components/sign-in-form';
+import { AuthShell } from '../layout/auth-shell';
+import { SessionLoading } from './full-page-states';
+
+export function SignInRoute() {
+  const [searchParams] = useSearchParams();
+  const navigate = useNavigate();
+  const me = useMe();
+  const next = safeNext(searchParams.get('next'));
+  const hasNext = next !== '/';
+
+  if (me.isPending) return <SessionLoading />;
+  if (me.data) return <Navigate to={next} replace />;
+
+  return (
+    <AuthShell title="Sign in" description="Use the e-mail address your administrator invited.">
+      {hasNext ? (
+        <Alert tone="info" className="mb-5">
+          Sign in to open the page you asked for.
+        </Alert>
+      ) : null}
+      <SignInForm onSignedIn={() => void navigate(next, { replace: true })} />
+    </AuthShell>
+  );
+}
