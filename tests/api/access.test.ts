@@ -8,6 +8,11 @@ import { app, demoEmail, resetDatabase, signIn, type Agent } from './helpers.ts'
 const routes: Array<{ method: 'get'; path: string; action: Action }> = [
   { method: 'get', path: '/api/users', action: 'users:manage' },
   { method: 'get', path: '/api/mail', action: 'mail:read' },
+  { method: 'get', path: '/api/sites', action: 'assets:read' },
+  { method: 'get', path: '/api/module-models', action: 'assets:read' },
+  { method: 'get', path: '/api/inverter-models', action: 'assets:read' },
+  { method: 'get', path: '/api/work-orders', action: 'workOrders:read' },
+  { method: 'get', path: '/api/technicians', action: 'workOrders:dispatch' },
 ];
 
 const agents = new Map<string, Agent>();

@@ -33,6 +33,12 @@ export async function resetDatabase({ plant = false } = {}): Promise<void> {
   await mailIdle();
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 0');
   for (const table of [
+    'comments',
+    'work_order_events',
+    'work_order_strings',
+    'work_orders',
+    'work_order_counters',
+    'site_sla_hours',
     'sessions',
     'password_tokens',
     'mail_outbox',

@@ -1,7 +1,8 @@
 import { createApp } from './app.ts';
 import { env } from './config/env.ts';
 import { logger } from './lib/logger.ts';
-import { closeMailer, startMailSweep } from './lib/mailer.ts';
+import { closeMailer, mailIdle, startMailSweep } from './lib/mailer.ts';
+import { startOverdueSweep } from './services/overdue-sweep.service.ts';
 import { sequelize } from './models/index.ts';
 
 const app = createApp();
@@ -13,6 +14,7 @@ server.on('error', (err) => {
   process.exit(1);
 });
 const stopSweep = startMailSweep();
+const stopOverdue = startOverdueSweep();
 
 let closing = false;
 function shutdown(signal: string) {
@@ -20,9 +22,12 @@ function shutdown(signal: string) {
   closing = true;
   logger.info({ signal }, 'shutting down');
   stopSweep();
+  stopOverdue();
   server.close(() => {
-    closeMailer();
-    void sequelize.close().finally(() => process.exit(0));
+    void mailIdle().finally(() => {
+      closeMailer();
+      void sequelize.close().finally(() => process.exit(0));
+    });
   });
   setTimeout(() => process.exit(1), 10_000).unref();
 }

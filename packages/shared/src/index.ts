@@ -7,3 +7,4 @@ export * from './mail.ts';
 export * from './health.ts';
 export * from './module-spec.ts';
 export * from './assets.ts';
+export * from './work-orders.ts';

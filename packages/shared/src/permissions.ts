@@ -16,6 +16,22 @@ export const permissions = {
   'assets:read': everyone,
   /** Create and change sites, strings and datasheets. */
   'assets:write': ['admin', 'dispatcher'],
+  /** Read work orders (owners: signed-off tickets of their own sites only). */
+  'workOrders:read': everyone,
+  /** Open tickets, one or many at once. */
+  'workOrders:create': ['admin', 'dispatcher'],
+  /** Assign, reassign and change due time, title, priority. */
+  'workOrders:dispatch': ['admin', 'dispatcher'],
+  /** Cancel a ticket before sign-off, with a reason. */
+  'workOrders:cancel': ['admin', 'dispatcher'],
+  /** Start and submit the work on a ticket assigned to oneself. */
+  'workOrders:work': ['technician'],
+  /** Sign off or return a submitted ticket. */
+  'workOrders:review': ['supervisor'],
+  /** Comment on a ticket. */
+  'workOrders:comment': ['admin', 'dispatcher', 'technician', 'supervisor'],
+  /** Change the SLA hours per priority for a site. */
+  'sla:manage': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof permissions;

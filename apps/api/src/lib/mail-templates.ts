@@ -42,3 +42,47 @@ export function invitationMail(to: string, name: string, roleLabel: string, toke
     html: layout('Welcome to Stringfield', lines, { label: 'Set your password', url }),
   };
 }
+
+type TicketRef = { id: number; number: string; title: string; siteName: string; dueAt: Date; priority: string };
+
+function ticketMail(to: string, subject: string, title: string, lines: string[], ticket: TicketRef): OutgoingMail {
+  const url = `${env.APP_URL}/work-orders/${ticket.id}`;
+  const facts = [`${ticket.number} · ${ticket.priority} · ${ticket.siteName}`, `Due ${ticket.dueAt.toISOString().slice(0, 16).replace('T', ' ')} UTC`];
+  const all = [...lines, ...facts];
+  return {
+    to,
+    subject,
+    text: `${all.join('\n\n')}\n\nOpen the ticket: ${url}\n`,
+    html: layout(title, all, { label: `Open ${ticket.number}`, url }),
+  };
+}
+
+export function assignmentMail(to: string, name: string, t: TicketRef): OutgoingMail {
+  return ticketMail(to, `${t.number} assigned to you: ${t.title}`, 'A work order is assigned to you', [
+    `Hello ${name},`,
+    `${t.number} "${t.title}" is yours. Read the strings and symptoms on the ticket before you drive out.`,
+    'Work on DC strings only with PPE rated for DC arc flash, rated test leads and lock-out/tag-out; never open a connector under load. Local codes rule.',
+  ], t);
+}
+
+export function submissionMail(to: string, name: string, technician: string, t: TicketRef): OutgoingMail {
+  return ticketMail(to, `${t.number} is waiting for sign-off`, 'A work order is waiting for your sign-off', [
+    `Hello ${name},`,
+    `${technician} submitted ${t.number} "${t.title}". Review the evidence and sign it off or return it.`,
+  ], t);
+}
+
+export function returnMail(to: string, name: string, supervisor: string, reason: string, t: TicketRef): OutgoingMail {
+  return ticketMail(to, `${t.number} was returned: ${reason.slice(0, 60)}`, 'A work order was returned to you', [
+    `Hello ${name},`,
+    `${supervisor} returned ${t.number} "${t.title}".`,
+    `Reason: ${reason}`,
+  ], t);
+}
+
+export function overdueMail(to: string, name: string, t: TicketRef): OutgoingMail {
+  return ticketMail(to, `${t.number} is overdue`, 'A work order is overdue', [
+    `Hello ${name},`,
+    `${t.number} "${t.title}" passed its due time and is still open.`,
+  ], t);
+}

@@ -10,8 +10,9 @@ import { InverterModel } from './inverter-model.model.ts';
 import { Inverter } from './inverter.model.ts';
 import { CombinerBox } from './combiner-box.model.ts';
 import { PvString } from './pv-string.model.ts';
+import { Comment, SiteSlaHours, WorkOrder, WorkOrderEvent, WorkOrderString } from './work-order.model.ts';
 
-for (const model of [User, PasswordToken, Session, MailOutbox, RateLimitHit, Site, SiteOwner, ModuleModel, InverterModel, Inverter, CombinerBox, PvString]) {
+for (const model of [User, PasswordToken, Session, MailOutbox, RateLimitHit, Site, SiteOwner, ModuleModel, InverterModel, Inverter, CombinerBox, PvString, WorkOrder, WorkOrderString, WorkOrderEvent, Comment, SiteSlaHours]) {
   model.initModel(sequelize);
 }
 
@@ -29,6 +30,15 @@ PvString.belongsTo(CombinerBox, { foreignKey: 'combinerBoxId', as: 'combinerBox'
 PvString.belongsTo(ModuleModel, { foreignKey: 'moduleModelId', as: 'moduleModel' });
 Site.hasMany(SiteOwner, { foreignKey: 'siteId', as: 'owners' });
 
+WorkOrder.belongsTo(Site, { foreignKey: 'siteId', as: 'site' });
+WorkOrder.belongsTo(User, { foreignKey: 'assigneeId', as: 'assignee' });
+WorkOrder.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+WorkOrder.hasMany(WorkOrderString, { foreignKey: 'workOrderId', as: 'strings' });
+WorkOrderString.belongsTo(PvString, { foreignKey: 'stringId', as: 'string' });
+WorkOrder.hasMany(WorkOrderEvent, { foreignKey: 'workOrderId', as: 'events' });
+WorkOrderEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+WorkOrder.hasMany(Comment, { foreignKey: 'workOrderId', as: 'comments' });
+
 export {
   sequelize,
   User,
@@ -43,4 +53,9 @@ export {
   Inverter,
   CombinerBox,
   PvString,
+  WorkOrder,
+  WorkOrderString,
+  WorkOrderEvent,
+  Comment,
+  SiteSlaHours,
 };

@@ -18,6 +18,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare isActive: CreationOptional<boolean>;
   declare isDemo: CreationOptional<boolean>;
   declare lastSignInAt: Date | null;
+  /** Mail categories the user turned off, comma-separated. */
+  declare mailOptOut: CreationOptional<string>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -32,6 +34,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         isActive: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         isDemo: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         lastSignInAt: { type: DataTypes.DATE, allowNull: true },
+        mailOptOut: { type: DataTypes.STRING(200), allowNull: false, defaultValue: '' },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

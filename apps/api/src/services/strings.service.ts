@@ -180,7 +180,11 @@ export async function updateString(user: SessionUser, id: number, input: StringU
 export async function deleteString(user: SessionUser, id: number): Promise<void> {
   const s = await loadString(id);
   await findVisibleSite(user, s.siteId);
-  await sequelize.transaction(async (transaction) => {
-    await s.destroy({ transaction });
-  });
+  const [[row]] = (await sequelize.query('SELECT COUNT(*) AS n FROM work_order_strings WHERE string_id = :id', {
+    replacements: { id },
+  })) as unknown as [[{ n: number }]];
+  if (Number(row.n) > 0) {
+    throw new AppError('CONFLICT', `${s.label} is on ${row.n} work order(s) and keeps its history. Archive it instead.`);
+  }
+  await s.destroy();
 }
