@@ -3,8 +3,9 @@ import { hashPassword } from '../src/lib/passwords.ts';
 import { User, sequelize } from '../src/models/index.ts';
 import { DEMO_PASSWORD, demoUsers } from './demo-users.ts';
 import { seedDemoPlant } from './demo-plant.ts';
+import { seedDemoWorkOrders } from './demo-work-orders.ts';
 
-export type SeedResult = { status: 'seeded' | 'skipped'; reason?: string; users: number; sites?: number; strings?: number };
+export type SeedResult = { status: 'seeded' | 'skipped'; reason?: string; users: number; sites?: number; strings?: number; workOrders?: number };
 
 /**
  * Idempotent demo seed. It refuses to touch a database that holds accounts that are not demo
@@ -24,7 +25,9 @@ export async function seedDemo({ force = false, plant = true } = {}): Promise<Se
       if (row) await row.update({ name: u.name, role: u.role, isActive: true, isDemo: true }, { transaction });
       else await User.create({ ...u, passwordHash, isDemo: true, lastSignInAt: null }, { transaction });
     }
-    return plant ? seedDemoPlant(transaction) : { sites: 0, strings: 0 };
+    if (!plant) return { sites: 0, strings: 0, workOrders: 0 };
+    const layout = await seedDemoPlant(transaction);
+    return { ...layout, workOrders: await seedDemoWorkOrders(transaction) };
   });
   return { status: 'seeded', users: demoUsers.length, ...created };
 }

@@ -62,7 +62,7 @@ export async function setSlaHours(user: SessionUser, siteId: number, policy: Sla
 
 // ---------- numbering ----------
 /** Reserve `count` consecutive ticket numbers for a year, safely under concurrency (row lock on the counter). */
-async function reserveNumbers(year: number, count: number, transaction: Transaction): Promise<string[]> {
+export async function reserveNumbers(year: number, count: number, transaction: Transaction): Promise<string[]> {
   await sequelize.query(
     'INSERT INTO work_order_counters (year, last_number) VALUES (:year, :count) ON DUPLICATE KEY UPDATE last_number = last_number + :count',
     { replacements: { year, count }, transaction },
