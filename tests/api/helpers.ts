@@ -33,6 +33,9 @@ export async function resetDatabase({ plant = false } = {}): Promise<void> {
   await mailIdle();
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 0');
   for (const table of [
+    'iv_traces',
+    'string_checks',
+    'instruments',
     'comments',
     'work_order_events',
     'work_order_strings',

@@ -24,6 +24,7 @@ import {
   sitesRouter,
   stringsRouter,
 } from './routes/assets.routes.ts';
+import { checksRouter, instrumentsRouter, stringChecksRouter, ticketChecksRouter } from './routes/field-checks.routes.ts';
 import { meRouter, slaRouter, techniciansRouter, workOrdersRouter } from './routes/work-orders.routes.ts';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
@@ -119,12 +120,16 @@ export function createApp(options: AppOptions = {}): Express {
   app.use('/api/mail', mailRouter());
   app.use('/api/sites/:id/sla', slaRouter());
   app.use('/api/sites', sitesRouter());
+  app.use('/api/strings/:id/checks', stringChecksRouter());
   app.use('/api/strings', stringsRouter());
   app.use('/api/module-models', moduleModelsRouter());
   app.use('/api/inverter-models', inverterModelsRouter());
   app.use('/api/inverters', invertersRouter());
   app.use('/api/combiner-boxes', combinerBoxesRouter());
+  app.use('/api/work-orders/:id/checks', ticketChecksRouter());
   app.use('/api/work-orders', workOrdersRouter());
+  app.use('/api/checks', checksRouter());
+  app.use('/api/instruments', instrumentsRouter());
   app.use('/api/technicians', techniciansRouter());
   app.use('/api/me', meRouter());
   app.use('/api', notFoundApi);

@@ -8,3 +8,4 @@ export * from './health.ts';
 export * from './module-spec.ts';
 export * from './assets.ts';
 export * from './work-orders.ts';
+export * from './field-checks.ts';

@@ -30,6 +30,10 @@ export const permissions = {
   'workOrders:review': ['supervisor'],
   /** Comment on a ticket. */
   'workOrders:comment': ['admin', 'dispatcher', 'technician', 'supervisor'],
+  /** Record string checks and I-V traces on a ticket assigned to oneself. */
+  'checks:record': ['technician'],
+  /** Keep the instrument register (serials, calibration dates). */
+  'instruments:manage': ['admin', 'dispatcher', 'technician'],
   /** Change the SLA hours per priority for a site. */
   'sla:manage': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;

@@ -10,9 +10,10 @@ import { InverterModel } from './inverter-model.model.ts';
 import { Inverter } from './inverter.model.ts';
 import { CombinerBox } from './combiner-box.model.ts';
 import { PvString } from './pv-string.model.ts';
+import { Instrument, IvTrace, StringCheck } from './string-check.model.ts';
 import { Comment, SiteSlaHours, WorkOrder, WorkOrderEvent, WorkOrderString } from './work-order.model.ts';
 
-for (const model of [User, PasswordToken, Session, MailOutbox, RateLimitHit, Site, SiteOwner, ModuleModel, InverterModel, Inverter, CombinerBox, PvString, WorkOrder, WorkOrderString, WorkOrderEvent, Comment, SiteSlaHours]) {
+for (const model of [User, PasswordToken, Session, MailOutbox, RateLimitHit, Site, SiteOwner, ModuleModel, InverterModel, Inverter, CombinerBox, PvString, WorkOrder, WorkOrderString, WorkOrderEvent, Comment, SiteSlaHours, Instrument, StringCheck, IvTrace]) {
   model.initModel(sequelize);
 }
 
@@ -58,4 +59,7 @@ export {
   WorkOrderEvent,
   Comment,
   SiteSlaHours,
+  Instrument,
+  StringCheck,
+  IvTrace,
 };
