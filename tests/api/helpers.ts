@@ -33,6 +33,9 @@ export async function resetDatabase({ plant = false } = {}): Promise<void> {
   await mailIdle();
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 0');
   for (const table of [
+    'diode_replacements',
+    'thermal_findings',
+    'photos',
     'iv_traces',
     'string_checks',
     'instruments',

@@ -12,6 +12,7 @@ export const apiTestEnv = {
   SMTP_URL: 'smtp://127.0.0.1:1026',
   MAIL_PORT: '1026',
   MAIL_CATCHER_DIR: path.join(root, '.data/mail-test'),
+  UPLOADS_DIR: path.join(root, '.data/uploads-test'),
   APP_URL: 'http://127.0.0.1:8090',
   SESSION_SECRET: 'stringfield-api-tests-session-secret-0123456789',
   DEMO_SEED: 'true',

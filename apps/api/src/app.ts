@@ -25,6 +25,7 @@ import {
   stringsRouter,
 } from './routes/assets.routes.ts';
 import { checksRouter, instrumentsRouter, stringChecksRouter, ticketChecksRouter } from './routes/field-checks.routes.ts';
+import { diodesRouter, photosRouter, ticketDiodesRouter, ticketPhotosRouter } from './routes/evidence.routes.ts';
 import { meRouter, slaRouter, techniciansRouter, workOrdersRouter } from './routes/work-orders.routes.ts';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
@@ -127,9 +128,13 @@ export function createApp(options: AppOptions = {}): Express {
   app.use('/api/inverters', invertersRouter());
   app.use('/api/combiner-boxes', combinerBoxesRouter());
   app.use('/api/work-orders/:id/checks', ticketChecksRouter());
+  app.use('/api/work-orders/:id/photos', ticketPhotosRouter());
+  app.use('/api/work-orders/:id/diode-replacements', ticketDiodesRouter());
   app.use('/api/work-orders', workOrdersRouter());
   app.use('/api/checks', checksRouter());
   app.use('/api/instruments', instrumentsRouter());
+  app.use('/api/photos', photosRouter());
+  app.use('/api/diode-replacements', diodesRouter());
   app.use('/api/technicians', techniciansRouter());
   app.use('/api/me', meRouter());
   app.use('/api', notFoundApi);

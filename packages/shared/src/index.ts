@@ -9,3 +9,4 @@ export * from './module-spec.ts';
 export * from './assets.ts';
 export * from './work-orders.ts';
 export * from './field-checks.ts';
+export * from './evidence.ts';

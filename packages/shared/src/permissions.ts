@@ -32,6 +32,8 @@ export const permissions = {
   'workOrders:comment': ['admin', 'dispatcher', 'technician', 'supervisor'],
   /** Record string checks and I-V traces on a ticket assigned to oneself. */
   'checks:record': ['technician'],
+  /** Upload photos, record thermal findings and diode replacements on a ticket assigned to oneself. */
+  'evidence:add': ['technician'],
   /** Keep the instrument register (serials, calibration dates). */
   'instruments:manage': ['admin', 'dispatcher', 'technician'],
   /** Change the SLA hours per priority for a site. */

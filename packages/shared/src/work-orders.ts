@@ -213,6 +213,8 @@ export const workOrderDetailSchema = workOrderListItemSchema.extend({
     z.object({ id: z.number(), label: z.string(), symptom: z.string(), inverterTag: z.string(), mpptInput: z.number() }),
   ),
   events: z.array(workOrderEventSchema),
+  /** Raised by safety-relevant evidence (a CoA 3 thermal finding), for the dispatcher to act on. */
+  prioritySuggestion: z.object({ priority: prioritySchema, reason: z.string() }).nullable().optional(),
   allowedTransitions: z.array(
     z.object({ to: workOrderStatusSchema, label: z.string(), needsReason: z.boolean(), needsAssignee: z.boolean() }),
   ),

@@ -9,6 +9,7 @@ import {
   UniqueConstraintError,
 } from 'sequelize';
 import type { ApiErrorBody, ErrorCode } from '@stringfield/shared';
+import { env } from '../config/env.ts';
 import { AppError } from '../lib/app-error.ts';
 import { logger } from '../lib/logger.ts';
 
@@ -74,10 +75,12 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   if (err instanceof multer.MulterError) {
     const tooBig = err.code === 'LIMIT_FILE_SIZE';
     const message = tooBig
-      ? 'The file is too large (at most 10 MB). Split it into smaller files.'
-      : err.code === 'LIMIT_FILE_COUNT' || err.code === 'LIMIT_UNEXPECTED_FILE'
-        ? 'Send one file, in the form field "file".'
-        : `The upload was refused: ${err.message}.`;
+      ? `A file is too large (${err.field === 'files' ? `photos at most ${env.UPLOAD_MAX_MB} MB each` : 'at most 10 MB'}).`
+      : err.code === 'LIMIT_FILE_COUNT'
+        ? `Too many files at once (at most ${env.UPLOAD_MAX_FILES}).`
+        : err.code === 'LIMIT_UNEXPECTED_FILE'
+          ? `Unexpected file field "${err.field ?? ''}": send photos as "files" and CSV files as "file".`
+          : `The upload was refused: ${err.message}.`;
     res.status(tooBig ? 413 : 400).json(body(tooBig ? 'PAYLOAD_TOO_LARGE' : 'VALIDATION_FAILED', message, rid));
     return;
   }

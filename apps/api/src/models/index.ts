@@ -11,9 +11,10 @@ import { Inverter } from './inverter.model.ts';
 import { CombinerBox } from './combiner-box.model.ts';
 import { PvString } from './pv-string.model.ts';
 import { Instrument, IvTrace, StringCheck } from './string-check.model.ts';
+import { DiodeReplacement, Photo, ThermalFinding } from './evidence.model.ts';
 import { Comment, SiteSlaHours, WorkOrder, WorkOrderEvent, WorkOrderString } from './work-order.model.ts';
 
-for (const model of [User, PasswordToken, Session, MailOutbox, RateLimitHit, Site, SiteOwner, ModuleModel, InverterModel, Inverter, CombinerBox, PvString, WorkOrder, WorkOrderString, WorkOrderEvent, Comment, SiteSlaHours, Instrument, StringCheck, IvTrace]) {
+for (const model of [User, PasswordToken, Session, MailOutbox, RateLimitHit, Site, SiteOwner, ModuleModel, InverterModel, Inverter, CombinerBox, PvString, WorkOrder, WorkOrderString, WorkOrderEvent, Comment, SiteSlaHours, Instrument, StringCheck, IvTrace, Photo, ThermalFinding, DiodeReplacement]) {
   model.initModel(sequelize);
 }
 
@@ -62,4 +63,7 @@ export {
   Instrument,
   StringCheck,
   IvTrace,
+  Photo,
+  ThermalFinding,
+  DiodeReplacement,
 };

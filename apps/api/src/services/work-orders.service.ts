@@ -39,6 +39,7 @@ import {
   sequelize,
 } from '../models/index.ts';
 import { findVisibleSite, visibleSiteIds } from './site-access.ts';
+import { prioritySuggestion } from './evidence.service.ts';
 
 type ListQuery = z.infer<typeof workOrderListQuerySchema> & PageQuery;
 
@@ -252,6 +253,7 @@ export async function getWorkOrder(user: SessionUser, id: number): Promise<WorkO
     cancelReason: wo.cancelReason ?? null,
     strings: stringsDto,
     events: await listEvents(user, id),
+    prioritySuggestion: wo.priority === 'P1' ? null : await prioritySuggestion(id),
     allowedTransitions: allowedTransitions(user, wo),
   };
 }

@@ -1,0 +1,398 @@
+import { createHash, randomUUID } from 'node:crypto';
+import sharp from 'sharp';
+import exifr from 'exifr';
+import { classifyThermalAnomaly, type ThermalPattern } from '@stringfield/pv';
+import {
+  diodeReplacementInputSchema,
+  photoMetaSchema,
+  type DiodeReplacement as DiodeReplacementDto,
+  type DiodeReplacementInput,
+  type Photo as PhotoDto,
+  type PhotoMeta,
+  type SessionUser,
+  type ThermalFindingInput,
+} from '@stringfield/shared';
+import { z } from 'zod';
+import { env } from '../config/env.ts';
+import { AppError, notFound } from '../lib/app-error.ts';
+import { logger } from '../lib/logger.ts';
+import { storage } from '../lib/storage.ts';
+import { DiodeReplacement, Photo, PvString, ThermalFinding, User, WorkOrder, WorkOrderString, sequelize } from '../models/index.ts';
+import { visibleSiteIds } from './site-access.ts';
+
+// A 12-megapixel phone photo is 4000 × 3000; 50 MP refuses decompression bombs long before memory runs out.
+const MAX_INPUT_PIXELS = 50_000_000;
+const SIZES = { original: 4096, screen: 1600, thumb: 320 } as const;
+const ACCEPTED = new Set(['jpeg', 'png', 'webp']);
+
+const patternMap: Record<string, ThermalPattern> = {
+  single_cell: 'hot-cell',
+  substring: 'warm-substring',
+  whole_module: 'warm-module',
+  junction_box: 'warm-junction-box',
+  connector: 'hot-connector',
+  diode: 'warm-junction-box',
+};
+
+export type UploadFile = { originalname: string; buffer: Buffer; mimetype: string };
+
+type Processed = {
+  meta: PhotoMeta;
+  original: Buffer;
+  originalType: string;
+  screen: Buffer;
+  thumb: Buffer;
+  width: number;
+  height: number;
+  sha256: string;
+  capturedAt: Date | null;
+  gps: { lat: number; lon: number } | null;
+};
+
+async function processImage(file: UploadFile, meta: PhotoMeta, index: number): Promise<Processed> {
+  const name = file.originalname || `file ${index + 1}`;
+  let format: string | undefined;
+  try {
+    format = (await sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS }).metadata()).format;
+  } catch (err) {
+    const msg = (err as Error).message;
+    if (/pixel limit/i.test(msg)) throw new AppError('VALIDATION_FAILED', `${name} has more than 50 megapixels; send a smaller image.`);
+    throw new AppError('VALIDATION_FAILED', `${name} is not an image we can read (JPEG, PNG or WebP).`);
+  }
+  if (format === 'heif') {
+    throw new AppError('VALIDATION_FAILED', `${name} is HEIC, which Stringfield cannot decode yet. Set the phone camera to "Most compatible" (JPEG) or send a JPEG.`);
+  }
+  if (!format || !ACCEPTED.has(format)) {
+    throw new AppError('VALIDATION_FAILED', `${name} is ${format ? format.toUpperCase() : 'not an image'}; send JPEG, PNG or WebP photos.`);
+  }
+  let exif: { DateTimeOriginal?: Date; CreateDate?: Date; latitude?: number; longitude?: number } | undefined;
+  try {
+    exif = (await exifr.parse(file.buffer, { pick: ['DateTimeOriginal', 'CreateDate', 'GPSLatitude', 'GPSLongitude', 'GPSLatitudeRef', 'GPSLongitudeRef'], gps: true })) as typeof exif;
+  } catch {
+    exif = undefined;
+  }
+  try {
+    // rotate() applies the EXIF orientation; sharp writes no metadata unless asked, so EXIF is stripped.
+    const base = () => sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' }).rotate();
+    const encode = (px: number) => base().resize({ width: px, height: px, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 82, mozjpeg: true }).toBuffer({ resolveWithObject: true });
+    const [screen, thumb, normalised] = await Promise.all([encode(SIZES.screen), encode(SIZES.thumb), encode(SIZES.original)]);
+    const captured = exif?.DateTimeOriginal ?? exif?.CreateDate ?? null;
+    return {
+      meta,
+      original: file.buffer,
+      originalType: `image/${format}`,
+      screen: screen.data,
+      thumb: thumb.data,
+      width: normalised.info.width,
+      height: normalised.info.height,
+      sha256: createHash('sha256').update(file.buffer).digest('hex'),
+      capturedAt: captured instanceof Date && !Number.isNaN(captured.getTime()) ? captured : null,
+      gps: typeof exif?.latitude === 'number' && typeof exif.longitude === 'number' ? { lat: exif.latitude, lon: exif.longitude } : null,
+    };
+  } catch (err) {
+    logger.info({ err: (err as Error).message, name }, 'image refused');
+    throw new AppError('VALIDATION_FAILED', `${name} is damaged or incomplete and could not be read.`);
+  }
+}
+
+async function ticketForEvidence(user: SessionUser, workOrderId: number): Promise<WorkOrder> {
+  const wo = await WorkOrder.findByPk(workOrderId);
+  if (!wo) throw notFound('That work order');
+  if (wo.assigneeId !== user.id) throw new AppError('FORBIDDEN', `Only the technician assigned to ${wo.number} adds its evidence.`);
+  if (wo.status !== 'in_field') throw new AppError('CONFLICT', `${wo.number} is not in the field; evidence is added while the work is under way.`);
+  return wo;
+}
+
+export async function visibleTicket(user: SessionUser, workOrderId: number): Promise<WorkOrder> {
+  const wo = await WorkOrder.findByPk(workOrderId);
+  if (!wo) throw notFound('That work order');
+  if (user.role === 'owner') {
+    const ids = (await visibleSiteIds(user)) ?? [];
+    if (!ids.includes(wo.siteId) || wo.status !== 'signed_off') throw notFound('That work order');
+  }
+  return wo;
+}
+
+function photoUrls(id: number) {
+  return { thumb: `/api/photos/${id}/thumb`, screen: `/api/photos/${id}/screen`, original: `/api/photos/${id}/original` };
+}
+
+async function photoDtos(rows: Photo[]): Promise<PhotoDto[]> {
+  if (rows.length === 0) return [];
+  const [users, strings, thermal] = await Promise.all([
+    User.findAll({ where: { id: [...new Set(rows.map((r) => r.uploadedById))] }, attributes: ['id', 'name'] }),
+    PvString.findAll({ where: { id: [...new Set(rows.map((r) => r.stringId).filter((x): x is number => x !== null))] }, attributes: ['id', 'label'] }),
+    ThermalFinding.findAll({ where: { photoId: rows.map((r) => r.id) } }),
+  ]);
+  const name = new Map(users.map((u) => [u.id, u.name]));
+  const label = new Map(strings.map((s) => [s.id, s.label]));
+  const findings = new Map(thermal.map((t) => [t.photoId, t]));
+  return rows.map((r) => {
+    const t = findings.get(r.id);
+    return {
+      id: r.id,
+      workOrderId: r.workOrderId,
+      stringId: r.stringId,
+      stringLabel: r.stringId ? (label.get(r.stringId) ?? null) : null,
+      modulePosition: r.modulePosition,
+      tag: r.tag,
+      caption: r.caption,
+      width: r.width,
+      height: r.height,
+      bytes: r.bytes,
+      sha256: r.sha256,
+      capturedAt: r.capturedAt ? r.capturedAt.toISOString() : null,
+      gps: r.gpsLat !== null && r.gpsLon !== null ? { lat: r.gpsLat, lon: r.gpsLon } : null,
+      uploadedBy: { id: r.uploadedById, name: name.get(r.uploadedById) ?? '' },
+      createdAt: r.createdAt.toISOString(),
+      urls: photoUrls(r.id),
+      thermal: t
+        ? {
+            hottestC: t.hottestC,
+            referenceC: t.referenceC,
+            deltaTC: t.hottestC - t.referenceC,
+            irradianceWm2: t.irradianceWm2,
+            pattern: t.pattern,
+            modulePosition: t.modulePosition,
+            classOfAbnormality: t.classOfAbnormality,
+            isConditionsTooPoor: t.isConditionsTooPoor,
+            reason: t.reason,
+          }
+        : null,
+    };
+  });
+}
+
+/**
+ * Upload photos: every file is checked and re-encoded in memory first; only when all of them are good
+ * are they written, and a failure while writing removes what was written, so nothing is left half done.
+ */
+export async function uploadPhotos(user: SessionUser, workOrderId: number, files: UploadFile[], rawMeta: string | undefined): Promise<PhotoDto[]> {
+  const wo = await ticketForEvidence(user, workOrderId);
+  if (files.length === 0) throw new AppError('VALIDATION_FAILED', 'Attach at least one photo in the form field "files".', { files: 'Choose a photo' });
+  let metaList: PhotoMeta[];
+  try {
+    const parsed: unknown = rawMeta ? JSON.parse(rawMeta) : [];
+    metaList = z.array(photoMetaSchema).parse(Array.isArray(parsed) ? parsed : [parsed]);
+  } catch (err) {
+    if (err instanceof z.ZodError) throw err;
+    throw new AppError('VALIDATION_FAILED', 'The "meta" field must be JSON: one { tag, stringId?, modulePosition?, caption? } per file.');
+  }
+  if (metaList.length !== files.length) {
+    throw new AppError('VALIDATION_FAILED', `Send one meta entry per file (${files.length} files, ${metaList.length} entries).`);
+  }
+  const stringIds = [...new Set(metaList.map((m) => m.stringId).filter((x): x is number => x !== null))];
+  if (stringIds.length) {
+    const onTicket = await WorkOrderString.count({ where: { workOrderId: wo.id, stringId: stringIds } });
+    if (onTicket !== stringIds.length) throw new AppError('VALIDATION_FAILED', `A photo names a string that is not on ${wo.number}.`, { stringId: 'Not on this ticket' });
+  }
+  const processed: Processed[] = [];
+  for (const [i, file] of files.entries()) processed.push(await processImage(file, metaList[i]!, i));
+
+  const written: string[] = [];
+  try {
+    const rows = await sequelize.transaction(async (transaction) => {
+      const out: Photo[] = [];
+      for (const p of processed) {
+        const stem = `photos/${wo.id}/${randomUUID()}`;
+        const keys = { original: `${stem}-original.${p.originalType.split('/')[1]}`, screen: `${stem}-screen.jpg`, thumb: `${stem}-thumb.jpg` };
+        await storage.put(keys.original, p.original, p.originalType);
+        written.push(keys.original);
+        await storage.put(keys.screen, p.screen, 'image/jpeg');
+        written.push(keys.screen);
+        await storage.put(keys.thumb, p.thumb, 'image/jpeg');
+        written.push(keys.thumb);
+        out.push(
+          await Photo.create(
+            {
+              workOrderId: wo.id,
+              stringId: p.meta.stringId,
+              modulePosition: p.meta.modulePosition,
+              tag: p.meta.tag,
+              caption: p.meta.caption,
+              originalKey: keys.original,
+              originalType: p.originalType,
+              screenKey: keys.screen,
+              thumbKey: keys.thumb,
+              width: p.width,
+              height: p.height,
+              bytes: p.original.length,
+              sha256: p.sha256,
+              capturedAt: p.capturedAt,
+              gpsLat: p.gps?.lat ?? null,
+              gpsLon: p.gps?.lon ?? null,
+              uploadedById: user.id,
+            },
+            { transaction },
+          ),
+        );
+      }
+      return out;
+    });
+    return photoDtos(rows);
+  } catch (err) {
+    await Promise.all(written.map((k) => storage.delete(k).catch(() => undefined)));
+    throw err;
+  }
+}
+
+export async function listPhotos(user: SessionUser, workOrderId: number): Promise<PhotoDto[]> {
+  await visibleTicket(user, workOrderId);
+  return photoDtos(await Photo.findAll({ where: { workOrderId }, order: [['id', 'ASC']] }));
+}
+
+export async function readPhotoFile(user: SessionUser, photoId: number, size: 'thumb' | 'screen' | 'original'): Promise<{ data: Buffer; contentType: string }> {
+  const p = await Photo.findByPk(photoId);
+  if (!p) throw notFound('That photo');
+  await visibleTicket(user, p.workOrderId);
+  const key = size === 'original' ? p.originalKey : size === 'screen' ? p.screenKey : p.thumbKey;
+  return { data: await storage.get(key), contentType: size === 'original' ? p.originalType : 'image/jpeg' };
+}
+
+/** Record the thermal finding of a thermal image; the severity class comes from packages/pv. */
+export async function recordThermalFinding(user: SessionUser, photoId: number, input: ThermalFindingInput): Promise<PhotoDto> {
+  const p = await Photo.findByPk(photoId);
+  if (!p) throw notFound('That photo');
+  await ticketForEvidence(user, p.workOrderId);
+  if (p.tag !== 'thermal') throw new AppError('VALIDATION_FAILED', 'Thermal findings belong to photos tagged "thermal".');
+  const c = classifyThermalAnomaly({
+    deltaTC: input.hottestC - input.referenceC,
+    irradianceWm2: input.irradianceWm2,
+    pattern: patternMap[input.pattern] ?? 'other',
+    maxTempC: input.hottestC,
+  });
+  await ThermalFinding.upsert({
+    photoId,
+    hottestC: input.hottestC,
+    referenceC: input.referenceC,
+    irradianceWm2: input.irradianceWm2,
+    pattern: input.pattern,
+    modulePosition: input.modulePosition,
+    classOfAbnormality: c.classOfAbnormality,
+    isConditionsTooPoor: c.isConditionsTooPoor,
+    reason: c.reason.slice(0, 1000),
+  });
+  return (await photoDtos([p]))[0]!;
+}
+
+/** CoA 3 thermal findings on a ticket suggest raising it to P1. */
+export async function prioritySuggestion(workOrderId: number): Promise<{ priority: 'P1'; reason: string } | null> {
+  const photos = await Photo.findAll({ where: { workOrderId, tag: 'thermal' }, attributes: ['id'] });
+  if (photos.length === 0) return null;
+  const worst = await ThermalFinding.findOne({ where: { photoId: photos.map((p) => p.id), classOfAbnormality: 3 } });
+  return worst ? { priority: 'P1', reason: `A thermal finding is safety-relevant (CoA 3): ${worst.reason}` } : null;
+}
+
+// ---------- diode replacements ----------
+function missingOf(d: DiodeReplacement): string[] {
+  const missing: string[] = [];
+  if (!d.moduleSerial) missing.push('module serial');
+  if (d.newDiodeForwardV === null) missing.push('forward voltage of the new diode');
+  if (d.vocBeforeV === null) missing.push('Voc before');
+  if (d.vocAfterV === null) missing.push('Voc after');
+  if (!d.beforePhotoId) missing.push('photo before');
+  if (!d.afterPhotoId) missing.push('photo after');
+  const removed = JSON.parse(d.removedPartJson) as Record<string, unknown>;
+  if (!removed.partNumber) missing.push('removed part number');
+  return missing;
+}
+
+async function diodeDtos(rows: DiodeReplacement[]): Promise<DiodeReplacementDto[]> {
+  if (rows.length === 0) return [];
+  const [users, strings, tickets] = await Promise.all([
+    User.findAll({ where: { id: [...new Set(rows.map((r) => r.technicianId))] }, attributes: ['id', 'name'] }),
+    PvString.findAll({ where: { id: [...new Set(rows.map((r) => r.stringId))] }, attributes: ['id', 'label'] }),
+    WorkOrder.findAll({ where: { id: [...new Set(rows.map((r) => r.workOrderId))] }, attributes: ['id', 'number'] }),
+  ]);
+  const name = new Map(users.map((u) => [u.id, u.name]));
+  const label = new Map(strings.map((s) => [s.id, s.label]));
+  const number = new Map(tickets.map((t) => [t.id, t.number]));
+  return rows.map((d) => ({
+    id: d.id,
+    workOrderId: d.workOrderId,
+    workOrderNumber: number.get(d.workOrderId) ?? '',
+    stringId: d.stringId,
+    stringLabel: label.get(d.stringId) ?? '',
+    modulePosition: d.modulePosition,
+    moduleSerial: d.moduleSerial,
+    diodePosition: d.diodePosition,
+    failureMode: d.failureMode as DiodeReplacementDto['failureMode'],
+    foundBy: d.foundBy as DiodeReplacementDto['foundBy'],
+    removedPart: JSON.parse(d.removedPartJson) as Record<string, unknown>,
+    installedPart: JSON.parse(d.installedPartJson) as Record<string, unknown>,
+    newDiodeForwardV: d.newDiodeForwardV,
+    vocBeforeV: d.vocBeforeV,
+    vocAfterV: d.vocAfterV,
+    beforePhotoId: d.beforePhotoId,
+    afterPhotoId: d.afterPhotoId,
+    notes: d.notes,
+    technician: { id: d.technicianId, name: name.get(d.technicianId) ?? '' },
+    createdAt: d.createdAt.toISOString(),
+    missing: missingOf(d),
+  }));
+}
+
+async function checkDiodeRefs(wo: WorkOrder, input: DiodeReplacementInput): Promise<void> {
+  const onTicket = await WorkOrderString.findOne({ where: { workOrderId: wo.id, stringId: input.stringId } });
+  if (!onTicket) throw new AppError('VALIDATION_FAILED', `That string is not on ${wo.number}.`, { stringId: 'Not on this ticket' });
+  const s = await PvString.findByPk(input.stringId, { include: [{ association: 'moduleModel' }] });
+  if (s && input.modulePosition > s.modulesInSeries) {
+    throw new AppError('VALIDATION_FAILED', `${s.label} has ${s.modulesInSeries} modules.`, { modulePosition: `1 to ${s.modulesInSeries}` });
+  }
+  if (s?.moduleModel && input.diodePosition > s.moduleModel.bypassDiodes) {
+    throw new AppError('VALIDATION_FAILED', `That module has ${s.moduleModel.bypassDiodes} bypass diodes.`, { diodePosition: `1 to ${s.moduleModel.bypassDiodes}` });
+  }
+  for (const [field, id] of [['beforePhotoId', input.beforePhotoId], ['afterPhotoId', input.afterPhotoId]] as const) {
+    if (id === null) continue;
+    const photo = await Photo.findByPk(id);
+    if (!photo || photo.workOrderId !== wo.id) throw new AppError('VALIDATION_FAILED', 'Link photos of this ticket only.', { [field]: 'Not a photo of this ticket' });
+  }
+}
+
+function diodeFields(input: DiodeReplacementInput) {
+  return {
+    stringId: input.stringId,
+    modulePosition: input.modulePosition,
+    moduleSerial: input.moduleSerial,
+    diodePosition: input.diodePosition,
+    failureMode: input.failureMode,
+    foundBy: input.foundBy,
+    removedPartJson: JSON.stringify(input.removedPart),
+    installedPartJson: JSON.stringify(input.installedPart),
+    newDiodeForwardV: input.newDiodeForwardV,
+    vocBeforeV: input.vocBeforeV,
+    vocAfterV: input.vocAfterV,
+    beforePhotoId: input.beforePhotoId,
+    afterPhotoId: input.afterPhotoId,
+    notes: input.notes,
+  };
+}
+
+export async function recordDiodeReplacement(user: SessionUser, workOrderId: number, input: DiodeReplacementInput): Promise<DiodeReplacementDto> {
+  const wo = await ticketForEvidence(user, workOrderId);
+  await checkDiodeRefs(wo, input);
+  const row = await DiodeReplacement.create({ workOrderId: wo.id, technicianId: user.id, ...diodeFields(input) });
+  return (await diodeDtos([row]))[0]!;
+}
+
+export async function updateDiodeReplacement(user: SessionUser, id: number, input: DiodeReplacementInput): Promise<DiodeReplacementDto> {
+  const row = await DiodeReplacement.findByPk(id);
+  if (!row) throw notFound('That diode replacement');
+  const wo = await ticketForEvidence(user, row.workOrderId);
+  await checkDiodeRefs(wo, diodeReplacementInputSchema.parse(input));
+  await row.update(diodeFields(input));
+  return (await diodeDtos([row]))[0]!;
+}
+
+export async function listDiodeReplacements(user: SessionUser, filter: { workOrderId?: number; stringId?: number }): Promise<DiodeReplacementDto[]> {
+  if (filter.workOrderId) await visibleTicket(user, filter.workOrderId);
+  const where: Record<string, unknown> = { ...filter };
+  if (user.role === 'owner' && !filter.workOrderId) {
+    const ids = (await visibleSiteIds(user)) ?? [];
+    const signed = await WorkOrder.findAll({ where: { siteId: ids, status: 'signed_off' }, attributes: ['id'] });
+    where.workOrderId = signed.map((w) => w.id);
+  }
+  return diodeDtos(await DiodeReplacement.findAll({ where, order: [['id', 'ASC']] }));
+}
+
+export const uploadLimits = { fileSize: env.UPLOAD_MAX_MB * 1024 * 1024, files: env.UPLOAD_MAX_FILES };
