@@ -33,6 +33,7 @@ export async function resetDatabase({ plant = false } = {}): Promise<void> {
   await mailIdle();
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 0');
   for (const table of [
+    'sign_offs',
     'diode_replacements',
     'thermal_findings',
     'photos',

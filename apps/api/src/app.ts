@@ -26,6 +26,7 @@ import {
 } from './routes/assets.routes.ts';
 import { checksRouter, instrumentsRouter, stringChecksRouter, ticketChecksRouter } from './routes/field-checks.routes.ts';
 import { diodesRouter, photosRouter, ticketDiodesRouter, ticketPhotosRouter } from './routes/evidence.routes.ts';
+import { signOffRouter } from './routes/sign-off.routes.ts';
 import { meRouter, slaRouter, techniciansRouter, workOrdersRouter } from './routes/work-orders.routes.ts';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
@@ -130,6 +131,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use('/api/work-orders/:id/checks', ticketChecksRouter());
   app.use('/api/work-orders/:id/photos', ticketPhotosRouter());
   app.use('/api/work-orders/:id/diode-replacements', ticketDiodesRouter());
+  app.use('/api/work-orders/:id', signOffRouter());
   app.use('/api/work-orders', workOrdersRouter());
   app.use('/api/checks', checksRouter());
   app.use('/api/instruments', instrumentsRouter());

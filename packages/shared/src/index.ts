@@ -10,3 +10,4 @@ export * from './assets.ts';
 export * from './work-orders.ts';
 export * from './field-checks.ts';
 export * from './evidence.ts';
+export * from './sign-off.ts';

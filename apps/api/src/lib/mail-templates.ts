@@ -86,3 +86,19 @@ export function overdueMail(to: string, name: string, t: TicketRef): OutgoingMai
     `${t.number} "${t.title}" passed its due time and is still open.`,
   ], t);
 }
+
+export function closeOutMail(to: string, t: TicketRef, supervisor: string, digest: string): OutgoingMail {
+  const url = `${env.APP_URL}/api/work-orders/${t.id}/report.pdf`;
+  const lines = [
+    'Hello,',
+    `${t.number} "${t.title}" at ${t.siteName} was signed off by ${supervisor}.`,
+    'The close-out report (PDF) holds the before and after measurements, photos and the sign-off record.',
+    `Evidence digest (SHA-256): ${digest}`,
+  ];
+  return {
+    to,
+    subject: `${t.number} signed off: close-out report`,
+    text: `${lines.join('\n\n')}\n\nDownload the report: ${url}\n`,
+    html: layout('Work order signed off', lines, { label: 'Download the close-out report', url }),
+  };
+}

@@ -12,9 +12,10 @@ import { CombinerBox } from './combiner-box.model.ts';
 import { PvString } from './pv-string.model.ts';
 import { Instrument, IvTrace, StringCheck } from './string-check.model.ts';
 import { DiodeReplacement, Photo, ThermalFinding } from './evidence.model.ts';
+import { SignOff } from './sign-off.model.ts';
 import { Comment, SiteSlaHours, WorkOrder, WorkOrderEvent, WorkOrderString } from './work-order.model.ts';
 
-for (const model of [User, PasswordToken, Session, MailOutbox, RateLimitHit, Site, SiteOwner, ModuleModel, InverterModel, Inverter, CombinerBox, PvString, WorkOrder, WorkOrderString, WorkOrderEvent, Comment, SiteSlaHours, Instrument, StringCheck, IvTrace, Photo, ThermalFinding, DiodeReplacement]) {
+for (const model of [User, PasswordToken, Session, MailOutbox, RateLimitHit, Site, SiteOwner, ModuleModel, InverterModel, Inverter, CombinerBox, PvString, WorkOrder, WorkOrderString, WorkOrderEvent, Comment, SiteSlaHours, Instrument, StringCheck, IvTrace, Photo, ThermalFinding, DiodeReplacement, SignOff]) {
   model.initModel(sequelize);
 }
 
@@ -66,4 +67,5 @@ export {
   Photo,
   ThermalFinding,
   DiodeReplacement,
+  SignOff,
 };

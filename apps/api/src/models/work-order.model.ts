@@ -33,6 +33,7 @@ export class WorkOrder extends Model<InferAttributes<WorkOrder>, InferCreationAt
   declare returnCount: CreationOptional<number>;
   declare overdueNotifiedAt: CreationOptional<Date | null>;
   declare overdueClaim: CreationOptional<string | null>;
+  declare pendingOfflineCount: CreationOptional<number>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -64,6 +65,7 @@ export class WorkOrder extends Model<InferAttributes<WorkOrder>, InferCreationAt
         returnCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         overdueNotifiedAt: { type: DataTypes.DATE, allowNull: true },
         overdueClaim: { type: DataTypes.STRING(64), allowNull: true },
+        pendingOfflineCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -40,6 +40,7 @@ import {
 } from '../models/index.ts';
 import { findVisibleSite, visibleSiteIds } from './site-access.ts';
 import { prioritySuggestion } from './evidence.service.ts';
+import { signOffWorkOrder } from './sign-off.service.ts';
 
 type ListQuery = z.infer<typeof workOrderListQuerySchema> & PageQuery;
 
@@ -396,6 +397,11 @@ export async function transitionWorkOrder(user: SessionUser, id: number, input: 
   }
   if (rule.needsReason && !input.reason) {
     throw new AppError('VALIDATION_FAILED', 'Give a reason.', { reason: 'Give a reason of at least 5 characters' });
+  }
+  if (rule.to === 'signed_off') {
+    // Signing off goes through the evidence gates; the plain transition does not bypass them.
+    await signOffWorkOrder(user, id, { version: input.version, comment: input.reason ?? '', overrides: [] });
+    return getWorkOrder(user, id);
   }
   const assigneeId = input.assigneeId ?? (rule.to === 'dispatched' ? undefined : null);
   if (rule.needsAssignee && !assigneeId) {
