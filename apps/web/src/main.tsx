@@ -1,9 +1,12 @@
+/// <reference types="vite-plugin-pwa/client" />
 import '@fontsource-variable/inter';
 import '@fontsource-variable/space-grotesk';
 import './styles.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router';
+import { toast } from 'sonner';
+import { registerSW } from 'virtual:pwa-register';
 import { AppProvider } from './app/provider';
 import { router } from './app/router';
 
@@ -17,3 +20,22 @@ createRoot(container).render(
     </AppProvider>
   </StrictMode>,
 );
+
+// The service worker exists only in a production build. A new release takes over at once; the page
+// reloads into it, except on a field page where a reading may be half typed: there it asks first.
+if (import.meta.env.PROD) {
+  registerSW({
+    immediate: true,
+    onNeedReload: () => {
+      if (!window.location.pathname.endsWith('/field')) {
+        window.location.reload();
+        return;
+      }
+      toast('A new version of Stringfield is ready', {
+        description: 'Save or cancel the reading you are typing, then reload.',
+        duration: Infinity,
+        action: { label: 'Reload', onClick: () => window.location.reload() },
+      });
+    },
+  });
+}

@@ -21,8 +21,13 @@ export type NavItem = {
 
 export const navItems: readonly NavItem[] = [
   { label: 'Today', to: paths.home(), pattern: routes.home, icon: 'today', isExact: true },
+  { label: 'Work orders', to: paths.workOrders(), pattern: routes.workOrders, icon: 'clipboard', action: 'workOrders:read' },
+  { label: 'Sites', to: paths.sites(), pattern: routes.sites, icon: 'bolt', action: 'assets:read' },
+  { label: 'Datasheets', to: paths.datasheets(), pattern: routes.datasheets, icon: 'file', action: 'assets:read' },
+  { label: 'Instruments', to: paths.instruments(), pattern: routes.instruments, icon: 'compass', action: 'instruments:manage' },
   { label: 'People', to: paths.people(), pattern: routes.people, icon: 'people', action: 'users:manage' },
   { label: 'Outbox', to: paths.outbox(), pattern: routes.outbox, icon: 'mail', action: 'mail:read' },
+  { label: 'Settings', to: paths.settings(), pattern: routes.settings, icon: 'settings' },
 ];
 
 /** The items a role may see, in order. */

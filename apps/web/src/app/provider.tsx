@@ -1,22 +1,69 @@
-import { QueryClientProvider } from '@tanstack/react-query';
+import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persister';
+import { onlineManager, type QueryClient } from '@tanstack/react-query';
+import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
+import { del, get, set } from 'idb-keyval';
 import { useState, type ReactNode } from 'react';
 import { Toaster } from 'sonner';
+import type { SessionUser } from '@stringfield/shared';
 import { authKeys } from '@/features/auth/api/keys';
 import { createQueryClient } from '@/lib/query-client';
+import {
+  createCacheOwner,
+  createUserScopedStorage,
+  persistedKeyPrefixes,
+  PERSIST_KEY,
+  PERSIST_MAX_AGE_MS,
+  shouldPersistQuery,
+  syncCacheOwner,
+  type KeyValueStore,
+} from '@/lib/query-persistence';
+
+const idb: KeyValueStore = { get: (key) => get(key), set: (key, value) => set(key, value), del: (key) => del(key) };
+const cacheOwner = createCacheOwner(typeof window === 'undefined' ? null : window.localStorage);
+
+/**
+ * Keeps what a technician needs offline (see lib/query-persistence) on the device, per person: the
+ * copy follows the signed-in person and is deleted on sign-out (the cache is cleared) or a lost session.
+ */
+function setUpPersistence(client: QueryClient) {
+  // Kept queries must outlive the persisted copy, or they would be dropped before being written.
+  for (const prefix of persistedKeyPrefixes) client.setQueryDefaults(prefix, { gcTime: PERSIST_MAX_AGE_MS });
+  // TanStack assumes "online" until an event says otherwise; a phone that starts without signal should pause, not fail.
+  if (typeof navigator !== 'undefined') onlineManager.setOnline(navigator.onLine);
+  client.getQueryCache().subscribe((event) => {
+    const key = event.query.queryKey as readonly unknown[];
+    if (key[0] !== authKeys.all[0] || key[1] !== authKeys.me()[1]) return;
+    if (event.type === 'removed') syncCacheOwner(idb, cacheOwner, null);
+    else if (event.type === 'updated' && event.action.type === 'success') {
+      const user = event.query.state.data as SessionUser | null | undefined;
+      syncCacheOwner(idb, cacheOwner, user ? user.id : null);
+    }
+  });
+  return createAsyncStoragePersister({ storage: createUserScopedStorage(idb, cacheOwner), key: PERSIST_KEY, throttleTime: 1000 });
+}
 
 /** Everything the app runs inside: the query cache and the toast outlet. */
 export function AppProvider({ children }: { children: ReactNode }) {
-  const [queryClient] = useState(() => {
+  const [{ queryClient, persister }] = useState(() => {
     const client = createQueryClient({
       // Any 401 means the session is gone (expired, or an administrator ended it): forget the person,
       // and the protected layout sends them to sign in with a way back.
       onUnauthenticated: () => client.setQueryData(authKeys.me(), null),
     });
-    return client;
+    return { queryClient: client, persister: setUpPersistence(client) };
   });
 
   return (
-    <QueryClientProvider client={queryClient}>
+    <PersistQueryClientProvider
+      client={queryClient}
+      persistOptions={{
+        persister,
+        maxAge: PERSIST_MAX_AGE_MS,
+        // A new release may change the shape of answers: start from a clean copy.
+        buster: 'stringfield-1',
+        dehydrateOptions: { shouldDehydrateQuery: (query) => query.state.status === 'success' && shouldPersistQuery(query.queryKey) },
+      }}
+    >
       {children}
       <Toaster
         position="top-center"
@@ -35,6 +82,6 @@ export function AppProvider({ children }: { children: ReactNode }) {
           },
         }}
       />
-    </QueryClientProvider>
+    </PersistQueryClientProvider>
   );
 }

@@ -1,5 +1,6 @@
-import { createBrowserRouter } from 'react-router';
+import { createBrowserRouter, Navigate } from 'react-router';
 import { routes } from '@/config/paths';
+import { FieldSyncLayout } from './routes/field-sync';
 import { ForgotPasswordRoute } from './routes/forgot-password';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
@@ -28,6 +29,8 @@ export const router = createBrowserRouter([
           {
             // Errors inside a page keep the navigation around them.
             errorElement: <RouteError />,
+            // Sends the technician's queued checks from whichever page is open.
+            element: <FieldSyncLayout />,
             children: [
               { index: true, element: <HomeRoute /> },
               {
@@ -61,6 +64,165 @@ export const router = createBrowserRouter([
                   { path: ':messageId', lazy: async () => ({ Component: (await import('./routes/outbox')).OutboxMessageRoute }) },
                 ],
               },
+              // Asset registry: lazy, so the technician's first page stays small; the string page carries the charts.
+              {
+                path: routes.sites,
+                lazy: async () => {
+                  const { SitesRoute } = await import('./routes/sites');
+                  return {
+                    element: (
+                      <RequirePermission action="assets:read" pageName="Sites">
+                        <SitesRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.site,
+                lazy: async () => {
+                  const { SiteRoute } = await import('./routes/site');
+                  return {
+                    element: (
+                      <RequirePermission action="assets:read" pageName="Site">
+                        <SiteRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.siteImport,
+                lazy: async () => {
+                  const { SiteImportRoute } = await import('./routes/site-import');
+                  return {
+                    element: (
+                      <RequirePermission action="assets:write" pageName="Import layout">
+                        <SiteImportRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.siteLabels,
+                lazy: async () => {
+                  const { SiteLabelsRoute } = await import('./routes/site-labels');
+                  return {
+                    element: (
+                      <RequirePermission action="assets:read" pageName="QR labels">
+                        <SiteLabelsRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.string,
+                lazy: async () => {
+                  const { StringRoute } = await import('./routes/string');
+                  return {
+                    element: (
+                      <RequirePermission action="assets:read" pageName="String">
+                        <StringRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              { path: routes.datasheets, element: <Navigate to={routes.moduleModels} replace /> },
+              {
+                path: routes.moduleModels,
+                lazy: async () => {
+                  const { ModuleModelsRoute } = await import('./routes/module-models');
+                  return {
+                    element: (
+                      <RequirePermission action="assets:read" pageName="Module datasheets">
+                        <ModuleModelsRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.inverterModels,
+                lazy: async () => {
+                  const { InverterModelsRoute } = await import('./routes/inverter-models');
+                  return {
+                    element: (
+                      <RequirePermission action="assets:read" pageName="Inverter datasheets">
+                        <InverterModelsRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.workOrders,
+                lazy: async () => {
+                  const { WorkOrdersRoute } = await import('./routes/work-orders');
+                  return {
+                    element: (
+                      <RequirePermission action="workOrders:read" pageName="Work orders">
+                        <WorkOrdersRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.newWorkOrder,
+                lazy: async () => {
+                  const { NewWorkOrderRoute } = await import('./routes/new-work-order');
+                  return {
+                    element: (
+                      <RequirePermission action="workOrders:create" pageName="New work order">
+                        <NewWorkOrderRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.workOrder,
+                lazy: async () => {
+                  const { WorkOrderRoute } = await import('./routes/work-order');
+                  return {
+                    element: (
+                      <RequirePermission action="workOrders:read" pageName="Work order">
+                        <WorkOrderRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.fieldChecks,
+                lazy: async () => {
+                  const { FieldChecksRoute } = await import('./routes/field-checks');
+                  return {
+                    element: (
+                      <RequirePermission action="workOrders:read" pageName="Field checks">
+                        <FieldChecksRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              {
+                path: routes.instruments,
+                lazy: async () => {
+                  const { InstrumentsRoute } = await import('./routes/instruments');
+                  return {
+                    element: (
+                      <RequirePermission action="instruments:manage" pageName="Instruments">
+                        <InstrumentsRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              { path: routes.settings, lazy: async () => ({ Component: (await import('./routes/settings')).SettingsRoute }) },
               { path: '*', element: <NotFoundRoute /> },
             ],
           },

@@ -10,6 +10,20 @@ export const routes = {
   people: '/people',
   outbox: '/outbox',
   outboxMessage: '/outbox/:messageId',
+  sites: '/sites',
+  datasheets: '/datasheets',
+  site: '/sites/:siteId',
+  siteImport: '/sites/:siteId/import',
+  siteLabels: '/sites/:siteId/labels',
+  string: '/strings/:stringId',
+  moduleModels: '/datasheets/modules',
+  inverterModels: '/datasheets/inverters',
+  workOrders: '/work-orders',
+  newWorkOrder: '/work-orders/new',
+  workOrder: '/work-orders/:workOrderId',
+  fieldChecks: '/work-orders/:workOrderId/field',
+  instruments: '/instruments',
+  settings: '/settings',
 } as const;
 
 type SearchValue = string | number | boolean | null | undefined;
@@ -54,4 +68,21 @@ export const paths = {
   outbox: (search: { page?: number } = {}) => `${routes.outbox}${toSearch({ page: search.page === 1 ? undefined : search.page })}`,
   outboxMessage: (messageId: string, search: { page?: number } = {}) =>
     `${routes.outbox}/${encodeURIComponent(messageId)}${toSearch({ page: search.page === 1 ? undefined : search.page })}`,
+  sites: (search: Record<string, SearchValue> = {}) => `${routes.sites}${toSearch(search)}`,
+  site: (siteId: number, search: Record<string, SearchValue> = {}) => `${routes.sites}/${siteId}${toSearch(search)}`,
+  datasheets: () => routes.datasheets,
+  siteImport: (siteId: number) => `${routes.sites}/${siteId}/import`,
+  siteLabels: (siteId: number, search: { inverterId?: number } = {}) => `${routes.sites}/${siteId}/labels${toSearch(search)}`,
+  string: (stringId: number) => `/strings/${stringId}`,
+  moduleModels: (search: Record<string, SearchValue> = {}) => `${routes.moduleModels}${toSearch(search)}`,
+  inverterModels: (search: Record<string, SearchValue> = {}) => `${routes.inverterModels}${toSearch(search)}`,
+  /** The board; `search` is the filter state as URL values (see work-orders list-params). */
+  workOrders: (search: Record<string, SearchValue> = {}) => `${routes.workOrders}${toSearch(search)}`,
+  workOrder: (workOrderId: number) => `${routes.workOrders}/${workOrderId}`,
+  /** The technician's field page of a ticket; `stringId` opens that string's check. */
+  fieldChecks: (workOrderId: number, search: { stringId?: number } = {}) =>
+    `${routes.workOrders}/${workOrderId}/field${toSearch({ string: search.stringId })}`,
+  instruments: () => routes.instruments,
+  newWorkOrder: (search: { siteId?: number } = {}) => `${routes.newWorkOrder}${toSearch(search)}`,
+  settings: () => routes.settings,
 } as const;

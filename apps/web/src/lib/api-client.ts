@@ -16,14 +16,27 @@ export class ApiError extends Error {
   readonly fields: Record<string, string> | undefined;
   /** The server's request id, worth quoting to whoever reads the logs. */
   readonly requestId: string | undefined;
+  /** The parsed error body as sent, for the extra fields some answers carry (a 409's `current`); read it with `errorBodyField`. */
+  readonly body: unknown;
 
-  constructor(init: { status: number; code: string; message: string; fields?: Record<string, string>; requestId?: string }) {
+  constructor(init: { status: number; code: string; message: string; fields?: Record<string, string>; requestId?: string; body?: unknown }) {
     super(init.message);
     this.status = init.status;
     this.code = init.code;
     this.fields = init.fields;
     this.requestId = init.requestId;
+    this.body = init.body;
   }
+}
+
+/**
+ * An extra top-level field of a failed answer's body (beside `error`), parsed with `schema`;
+ * undefined when the error has no such field or it does not parse. E.g. the fresh record a 409 sends back.
+ */
+export function errorBodyField<S extends z.ZodType>(error: unknown, key: string, schema: S): z.output<S> | undefined {
+  if (!isApiError(error) || typeof error.body !== 'object' || error.body === null) return undefined;
+  const parsed = schema.safeParse((error.body as Record<string, unknown>)[key]);
+  return parsed.success ? parsed.data : undefined;
 }
 
 export function isApiError(error: unknown): error is ApiError {
@@ -70,7 +83,7 @@ export function parseApiError(status: number, bodyText: string): ApiError {
   const parsed = apiErrorBodySchema.safeParse(json);
   if (parsed.success) {
     const { code, message, fields, requestId } = parsed.data.error;
-    return new ApiError({ status, code, message: message || genericMessage(status), fields, requestId });
+    return new ApiError({ status, code, message: message || genericMessage(status), fields, requestId, body: json });
   }
   return new ApiError({ status, code: codeByStatus[status] ?? 'INTERNAL', message: genericMessage(status) });
 }
@@ -112,6 +125,20 @@ async function fetchCsrfToken(): Promise<string> {
       csrfPending = null;
     });
   return csrfPending;
+}
+
+/**
+ * The session's CSRF token, fetched once and kept in memory, for requests that cannot go through
+ * `apiRequest` (an XMLHttpRequest upload that reports progress). On a 403 `CSRF_FAILED`, call
+ * `clearCsrfToken()` and ask again once.
+ */
+export function getCsrfToken(): Promise<string> {
+  return fetchCsrfToken();
+}
+
+/** The full URL of an API path, with the configured base in front (empty in development and same-origin). */
+export function apiUrl(path: string, query?: Record<string, string | number | boolean | null | undefined>): string {
+  return buildUrl(path, query);
 }
 
 function buildUrl(path: string, query: RequestOptions<undefined>['query']): string {
@@ -198,6 +225,8 @@ export const api = {
     apiRequest(path, { method: 'POST', body, schema }),
   patch: <S extends z.ZodType | undefined = undefined>(path: string, body: unknown, schema?: S) =>
     apiRequest(path, { method: 'PATCH', body, schema }),
+  put: <S extends z.ZodType | undefined = undefined>(path: string, body: unknown, schema?: S) =>
+    apiRequest(path, { method: 'PUT', body, schema }),
   delete: <S extends z.ZodType | undefined = undefined>(path: string, schema?: S) =>
     apiRequest(path, { method: 'DELETE', schema }),
 };

@@ -2,13 +2,14 @@ import { ButtonLink } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
 import { MyWork } from '@/features/home/components/my-work';
 import { Overview } from '@/features/home/components/overview';
+import { MyWorkList } from '@/features/work-orders/components/my-work-list';
 import { navItemsFor } from '../nav';
 import { useSessionUser } from '../session';
 
 /** "Today": technicians get their phone-first work list; every other role an overview. */
 export function HomeRoute() {
   const user = useSessionUser();
-  if (user.role === 'technician') return <MyWork user={user} />;
+  if (user.role === 'technician') return <MyWork user={user} work={<MyWorkList />} />;
 
   // Shortcuts are the role's own navigation, minus Today itself.
   const shortcuts = navItemsFor(user.role).filter((item) => !item.isExact);

@@ -99,7 +99,7 @@ export function DataTable<T>({
   return (
     <div aria-busy={isFetching || undefined} className={cn('transition-opacity', isFetching && 'opacity-60')}>
       {/* Desktop and tablet: a real table. */}
-      <div className="hidden overflow-hidden rounded-card border border-line bg-surface shadow-card md:block">
+      <div className="hidden overflow-x-auto rounded-card border border-line bg-surface shadow-card md:block">
         <table className="w-full border-collapse text-left">
           <caption className="sr-only">{caption}</caption>
           <thead className="bg-sunken">

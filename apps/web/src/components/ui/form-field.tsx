@@ -96,3 +96,17 @@ export function Select({ className, id, children, ...props }: ComponentProps<'se
     </div>
   );
 }
+
+export function Textarea({ className, id, rows = 3, ...props }: ComponentProps<'textarea'>) {
+  const field = useField();
+  return (
+    <textarea
+      id={id ?? field?.id}
+      rows={rows}
+      aria-describedby={field?.describedBy}
+      aria-invalid={field?.isInvalid || undefined}
+      className={cn(controlClasses, 'py-2.5 leading-normal', className)}
+      {...props}
+    />
+  );
+}

@@ -116,6 +116,32 @@ const paths = {
       <path d="M14 3v4h4M9 12h6M9 16h6" />
     </>
   ),
+  clock: (
+    <>
+      <circle cx="12" cy="12" r="9" />
+      <path d="M12 7v5l3.5 2" />
+    </>
+  ),
+  user: (
+    <>
+      <circle cx="12" cy="8" r="4" />
+      <path d="M4.5 21c.8-4 3.8-6.5 7.5-6.5s6.7 2.5 7.5 6.5" />
+    </>
+  ),
+  settings: (
+    <>
+      <path d="M4 7h10M18 7h2M4 17h2M10 17h10" />
+      <circle cx="16" cy="7" r="2.5" />
+      <circle cx="8" cy="17" r="2.5" />
+    </>
+  ),
+  chat: <path d="M4 5h16v11H9l-5 4V5Z" />,
+  play: <path d="M7 4.5v15l12-7.5-12-7.5Z" />,
+  send: <path d="M3.5 11.5 20.5 4l-6 16.5-3-7-8-2Z" />,
+  pencil: <path d="m4 20 1-4.5L15.5 5a2.1 2.1 0 0 1 3 3L8 18.5 4 20Z" />,
+  arrowRight: <path d="M4 12h15M13 6l6 6-6 6" />,
+  undo: <path d="M9 14 4 9l5-5M4 9h10a6 6 0 0 1 0 12h-3" />,
+  pause: <path d="M8 5v14M16 5v14" />,
 } as const;
 
 export type IconName = keyof typeof paths;

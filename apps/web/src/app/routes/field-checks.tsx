@@ -1,0 +1,67 @@
+import { can } from '@stringfield/shared';
+import { Link, useParams } from 'react-router';
+import { ButtonLink } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { ErrorState } from '@/components/ui/error-state';
+import { Icon } from '@/components/ui/icon';
+import { LoadingRegion, Skeleton } from '@/components/ui/skeleton';
+import { paths } from '@/config/paths';
+import { FieldPage } from '@/features/field-checks/components/field-page';
+import { useWorkOrder } from '@/features/work-orders/api/get-work-order';
+import { isApiError } from '@/lib/api-client';
+import { useSessionUser } from '../session';
+
+function FieldSkeleton() {
+  return (
+    <LoadingRegion label="Loading the field page" className="mx-auto flex max-w-3xl flex-col gap-4">
+      <Skeleton className="h-5 w-40" />
+      <Skeleton className="h-9 w-2/3" />
+      <Skeleton className="h-24 w-full rounded-card" />
+      <Skeleton className="h-24 w-full rounded-card" />
+    </LoadingRegion>
+  );
+}
+
+/**
+ * `/work-orders/:workOrderId/field`: the technician's field checks of one ticket. The ticket comes
+ * from the work-orders feature (the same cached copy as the ticket page, so it opens offline too).
+ */
+export function FieldChecksRoute() {
+  const user = useSessionUser();
+  const { workOrderId } = useParams();
+  const id = Number(workOrderId);
+  const isValidId = Number.isInteger(id) && id > 0;
+  const ticket = useWorkOrder(isValidId ? id : 0);
+
+  if (!isValidId || (ticket.isError && isApiError(ticket.error) && ticket.error.status === 404)) {
+    return (
+      <EmptyState
+        icon="search"
+        title="That work order is not here"
+        description="The link may be mistyped, or the ticket is not visible to your role."
+        action={
+          <ButtonLink to={paths.home()} variant="secondary">
+            Back to my work
+          </ButtonLink>
+        }
+      />
+    );
+  }
+  if (ticket.isPending) return <FieldSkeleton />;
+  if (!ticket.data) {
+    return (
+      <div className="mx-auto max-w-3xl">
+        <Link to={paths.home()} className="mb-4 inline-flex min-h-touch items-center gap-1 font-semibold text-brand">
+          <Icon name="chevronLeft" /> My work
+        </Link>
+        <ErrorState
+          title="The ticket did not load"
+          error={ticket.error}
+          onRetry={() => void ticket.refetch()}
+          isRetrying={ticket.isFetching}
+        />
+      </div>
+    );
+  }
+  return <FieldPage key={ticket.data.id} ticket={ticket.data} userId={user.id} canRecord={can(user.role, 'checks:record')} />;
+}

@@ -1,0 +1,100 @@
+import { importPreviewSchema, type ImportPreview } from '@stringfield/shared';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { ApiError, apiUrl, clearCsrfToken, genericMessage, getCsrfToken, parseApiError } from '@/lib/api-client';
+import { assetKeys } from './keys';
+
+export type ImportMode = 'dry-run' | 'commit';
+export type UploadProgress = { loadedBytes: number; totalBytes: number | undefined };
+
+/** A refused import that still says why, row by row: the API's 400 carries the checked `preview`. */
+export class ImportRejectedError extends ApiError {
+  readonly preview: ImportPreview;
+  constructor(error: ApiError, preview: ImportPreview) {
+    super({ status: error.status, code: error.code, message: error.message, fields: error.fields, requestId: error.requestId });
+    this.preview = preview;
+  }
+}
+
+const rejectedBodySchema = z.object({ preview: importPreviewSchema });
+
+type Sent = { status: number; text: string };
+
+/* fetch() cannot report upload progress; a 10 MB CSV on a site's mobile link can take a while. */
+function post(url: string, file: File, token: string, onProgress?: (p: UploadProgress) => void, signal?: AbortSignal): Promise<Sent> {
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', url);
+    xhr.withCredentials = true;
+    xhr.setRequestHeader('Accept', 'application/json');
+    xhr.setRequestHeader('x-csrf-token', token);
+    xhr.upload.onprogress = (event) => onProgress?.({ loadedBytes: event.loaded, totalBytes: event.lengthComputable ? event.total : undefined });
+    xhr.onload = () => resolve({ status: xhr.status, text: xhr.responseText });
+    xhr.onerror = () => reject(new ApiError({ status: 0, code: 'NETWORK', message: genericMessage(0) }));
+    xhr.onabort = () => reject(new DOMException('The upload was cancelled', 'AbortError'));
+    signal?.addEventListener('abort', () => xhr.abort(), { once: true });
+    const form = new FormData();
+    form.append('file', file, file.name);
+    xhr.send(form);
+  });
+}
+
+function parseJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
+/**
+ * Uploads a layout CSV: `dry-run` checks every row and changes nothing; `commit` imports all rows in
+ * one transaction or none. A refused commit throws ImportRejectedError with the row-by-row preview.
+ */
+export async function importLayout({
+  siteId,
+  file,
+  mode,
+  onProgress,
+  signal,
+}: {
+  siteId: number;
+  file: File;
+  mode: ImportMode;
+  onProgress?: (progress: UploadProgress) => void;
+  signal?: AbortSignal;
+}): Promise<ImportPreview> {
+  const url = apiUrl(`/api/sites/${siteId}/import`, { mode });
+  let sent = await post(url, file, await getCsrfToken(), onProgress, signal);
+  if (sent.status === 403 && parseApiError(sent.status, sent.text).code === 'CSRF_FAILED') {
+    clearCsrfToken();
+    sent = await post(url, file, await getCsrfToken(), onProgress, signal);
+  }
+
+  const json = parseJson(sent.text);
+  if (sent.status >= 200 && sent.status < 300) {
+    const parsed = importPreviewSchema.safeParse(json);
+    if (parsed.success) return parsed.data;
+    throw new ApiError({
+      status: sent.status,
+      code: 'BAD_RESPONSE',
+      message: 'Stringfield answered in a way this page does not understand. Reload the page; if it persists, tell your administrator.',
+    });
+  }
+  const error = parseApiError(sent.status, sent.text);
+  const rejected = rejectedBodySchema.safeParse(json);
+  if (rejected.success) throw new ImportRejectedError(error, rejected.data.preview);
+  throw error;
+}
+
+export function useImportLayout(siteId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { file: File; mode: ImportMode; onProgress?: (progress: UploadProgress) => void }) => importLayout({ siteId, ...input }),
+    onSuccess: async (preview) => {
+      if (!preview.committed) return;
+      await queryClient.invalidateQueries({ queryKey: assetKeys.sites() });
+      await queryClient.invalidateQueries({ queryKey: assetKeys.strings() });
+    },
+  });
+}
