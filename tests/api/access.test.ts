@@ -12,7 +12,10 @@ const routes: Array<{ method: 'get'; path: string; action: Action }> = [
   { method: 'get', path: '/api/module-models', action: 'assets:read' },
   { method: 'get', path: '/api/inverter-models', action: 'assets:read' },
   { method: 'get', path: '/api/work-orders', action: 'workOrders:read' },
-  { method: 'get', path: '/api/technicians', action: 'workOrders:dispatch' },
+  { method: 'get', path: '/api/technicians', action: 'workOrders:read' },
+  { method: 'get', path: '/api/instruments', action: 'workOrders:read' },
+  { method: 'get', path: '/api/fleet/energy-at-risk', action: 'fleet:read' },
+  { method: 'get', path: '/api/fleet/metrics?from=2026-01-01&to=2026-12-31', action: 'fleet:read' },
 ];
 
 const agents = new Map<string, Agent>();

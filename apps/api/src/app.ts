@@ -27,6 +27,7 @@ import {
 import { checksRouter, instrumentsRouter, stringChecksRouter, ticketChecksRouter } from './routes/field-checks.routes.ts';
 import { diodesRouter, photosRouter, ticketDiodesRouter, ticketPhotosRouter } from './routes/evidence.routes.ts';
 import { signOffRouter } from './routes/sign-off.routes.ts';
+import { fleetRouter } from './routes/fleet.routes.ts';
 import { meRouter, slaRouter, techniciansRouter, workOrdersRouter } from './routes/work-orders.routes.ts';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
@@ -139,6 +140,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use('/api/diode-replacements', diodesRouter());
   app.use('/api/technicians', techniciansRouter());
   app.use('/api/me', meRouter());
+  app.use('/api/fleet', fleetRouter());
   app.use('/api', notFoundApi);
 
   const webDist = options.webDist === undefined ? env.WEB_DIST : options.webDist;

@@ -51,6 +51,7 @@ export const siteInputSchema = z
     lowestAmbientC: num('Lowest expected ambient', '°C', -60, 40),
     highestAmbientC: num('Highest expected ambient', '°C', -20, 60),
     designIrradianceWm2: num('Design irradiance', 'W/m²', 200, 1400).default(1000),
+    peakSunHours: num('Peak sun hours', 'h/day', 0.5, 12).default(4.5),
     ownerContactEmail: z.email({ error: 'Enter a valid e-mail address for the owner contact' }).max(254),
     ownerUserIds: z.array(z.number().int().positive()).max(50).default([]),
   })
@@ -67,6 +68,7 @@ export const siteUpdateSchema = z
     lowestAmbientC: num('Lowest expected ambient', '°C', -60, 40).optional(),
     highestAmbientC: num('Highest expected ambient', '°C', -20, 60).optional(),
     designIrradianceWm2: num('Design irradiance', 'W/m²', 200, 1400).optional(),
+    peakSunHours: num('Peak sun hours', 'h/day', 0.5, 12).optional(),
     ownerContactEmail: z.email({ error: 'Enter a valid e-mail address' }).max(254).optional(),
     ownerUserIds: z.array(z.number().int().positive()).max(50).optional(),
     isArchived: z.boolean().optional(),
@@ -83,6 +85,7 @@ export const siteSchema = z.object({
   lowestAmbientC: z.number(),
   highestAmbientC: z.number(),
   designIrradianceWm2: z.number(),
+  peakSunHours: z.number(),
   ownerContactEmail: z.string(),
   ownerUserIds: z.array(z.number()),
   isArchived: z.boolean(),
@@ -272,6 +275,7 @@ export const stringListQuerySchema = listQuerySchema.extend({
   inverterId: z.coerce.number().int().positive().optional(),
   mpptInput: z.coerce.number().int().positive().optional(),
   moduleModelId: z.coerce.number().int().positive().optional(),
+  combinerBoxId: z.coerce.number().int().positive().optional(),
   sizing: z.enum(['all', 'fail', 'ok']).default('all'),
 });
 

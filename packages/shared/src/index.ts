@@ -11,3 +11,4 @@ export * from './work-orders.ts';
 export * from './field-checks.ts';
 export * from './evidence.ts';
 export * from './sign-off.ts';
+export * from './fleet.ts';

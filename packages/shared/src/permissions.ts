@@ -36,6 +36,10 @@ export const permissions = {
   'evidence:add': ['technician'],
   /** Keep the instrument register (serials, calibration dates). */
   'instruments:manage': ['admin', 'dispatcher', 'technician'],
+  /** Fleet view: health map, metrics and energy at risk (owners: their own sites). */
+  'fleet:read': ['admin', 'dispatcher', 'supervisor', 'owner'],
+  /** CSV exports of tickets, checks and diode replacements. */
+  'exports:read': ['admin', 'dispatcher', 'supervisor', 'owner'],
   /** Change the SLA hours per priority for a site. */
   'sla:manage': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;

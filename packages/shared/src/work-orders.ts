@@ -167,6 +167,12 @@ export const workOrderListQuerySchema = z.object({
   overdue: flag.optional(),
   open: flag.optional(),
   q: z.string().trim().max(100).optional(),
+  /** Exactly these tickets (comma-separated ids), e.g. the ones a bulk create just made. */
+  ids: z
+    .string()
+    .optional()
+    .transform((v) => (v ? v.split(',').map(Number) : undefined))
+    .pipe(z.array(z.number().int().positive({ error: 'ids: comma-separated ticket ids' })).max(500).optional()),
   sort: z
     .enum(['dueAt', '-dueAt', 'reportedAt', '-reportedAt', 'priority', '-priority', 'number', '-number', 'status', '-status'])
     .default('dueAt'),
@@ -187,6 +193,10 @@ export const workOrderListItemSchema = z.object({
   isDueSoon: z.boolean(),
   stringCount: z.number(),
   stringLabels: z.array(z.string()),
+  submittedAt: z.string().nullable().optional(),
+  signedOffAt: z.string().nullable().optional(),
+  /** For closed tickets: whether it was submitted before its due time. */
+  isSlaMet: z.boolean().nullable().optional(),
   version: z.number(),
 });
 export type WorkOrderListItem = z.infer<typeof workOrderListItemSchema>;

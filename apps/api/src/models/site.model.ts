@@ -16,6 +16,7 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
   declare lowestAmbientC: number;
   declare highestAmbientC: number;
   declare designIrradianceWm2: number;
+  declare peakSunHours: CreationOptional<number>;
   declare ownerContactEmail: string;
   declare isArchived: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
@@ -32,6 +33,7 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
         lowestAmbientC: { type: DataTypes.DOUBLE, allowNull: false },
         highestAmbientC: { type: DataTypes.DOUBLE, allowNull: false },
         designIrradianceWm2: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 1000 },
+        peakSunHours: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 4.5 },
         ownerContactEmail: { type: DataTypes.STRING(254), allowNull: false },
         isArchived: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         createdAt: DataTypes.DATE,

@@ -58,7 +58,8 @@ export function workOrdersRouter() {
 
 export function techniciansRouter() {
   const r = Router();
-  r.get('/', requirePermission('workOrders:dispatch'), async (_req, res) => {
+  // Everyone who reads the board may filter it by technician; only dispatchers assign.
+  r.get('/', requirePermission('workOrders:read'), async (_req, res) => {
     res.json({ items: await listAssignableTechnicians() });
   });
   return r;

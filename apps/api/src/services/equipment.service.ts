@@ -67,7 +67,7 @@ export async function deleteInverter(user: SessionUser, id: number): Promise<voi
   if (!inv) throw notFound('That inverter');
   await findVisibleSite(user, inv.siteId);
   const n = (await stringCounts('inverter_id', [id])).get(id) ?? 0;
-  if (n > 0) throw new AppError('CONFLICT', `${inv.tag} has ${n} string(s). Archive it instead of deleting it.`);
+  if (n > 0) throw new AppError('CONFLICT', `${inv.tag} has ${n} string${n === 1 ? '' : 's'}. Archive it instead of deleting it.`);
   await inv.destroy();
 }
 
@@ -109,6 +109,6 @@ export async function deleteCombinerBox(user: SessionUser, id: number): Promise<
   if (!box) throw notFound('That combiner box');
   await findVisibleSite(user, box.siteId);
   const n = (await stringCounts('combiner_box_id', [id])).get(id) ?? 0;
-  if (n > 0) throw new AppError('CONFLICT', `${box.tag} has ${n} string(s). Archive it instead of deleting it.`);
+  if (n > 0) throw new AppError('CONFLICT', `${box.tag} has ${n} string${n === 1 ? '' : 's'}. Archive it instead of deleting it.`);
   await box.destroy();
 }

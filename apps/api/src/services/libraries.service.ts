@@ -75,7 +75,7 @@ export async function deleteModuleModel(id: number): Promise<void> {
   const m = await ModuleModel.findByPk(id);
   if (!m) throw notFound('That module model');
   const n = (await usage(moduleUsageSql, [id])).get(id) ?? 0;
-  if (n > 0) throw new AppError('CONFLICT', `${m.model} is used by ${n} string(s). Archive it instead of deleting it.`);
+  if (n > 0) throw new AppError('CONFLICT', `${m.model} is used by ${n} string${n === 1 ? '' : 's'}. Archive it instead of deleting it.`);
   await m.destroy();
 }
 
@@ -114,6 +114,6 @@ export async function deleteInverterModel(id: number): Promise<void> {
   const m = await InverterModel.findByPk(id);
   if (!m) throw notFound('That inverter model');
   const n = (await usage(inverterUsageSql, [id])).get(id) ?? 0;
-  if (n > 0) throw new AppError('CONFLICT', `${m.model} is used by ${n} inverter(s). Archive it instead of deleting it.`);
+  if (n > 0) throw new AppError('CONFLICT', `${m.model} is used by ${n} inverter${n === 1 ? '' : 's'}. Archive it instead of deleting it.`);
   await m.destroy();
 }

@@ -44,6 +44,7 @@ function toDto(site: Site, stats: SiteStats, ownerUserIds: number[]): SiteDto {
     lowestAmbientC: site.lowestAmbientC,
     highestAmbientC: site.highestAmbientC,
     designIrradianceWm2: site.designIrradianceWm2,
+    peakSunHours: site.peakSunHours,
     ownerContactEmail: site.ownerContactEmail,
     ownerUserIds,
     isArchived: site.isArchived,

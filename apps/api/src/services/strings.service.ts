@@ -16,6 +16,8 @@ import { inverterModelDto, moduleModelDto, pvStringDto } from './dto.ts';
 import { findVisibleSite } from './site-access.ts';
 import { sizingChecks, sizingFailuresByCombo, type ComboFailures } from './sizing.service.ts';
 
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+
 type StringListQuery = z.infer<typeof stringListQuerySchema> & PageQuery;
 type StringUpdate = z.infer<typeof pvStringUpdateSchema>;
 
@@ -39,6 +41,7 @@ export async function listStrings(user: SessionUser, siteId: number, q: StringLi
   if (q.inverterId) where.push({ inverterId: q.inverterId });
   if (q.mpptInput) where.push({ mpptInput: q.mpptInput });
   if (q.moduleModelId) where.push({ moduleModelId: q.moduleModelId });
+  if (q.combinerBoxId) where.push({ combinerBoxId: q.combinerBoxId });
   if (q.sizing !== 'all') {
     const wanted = combos.filter((c) => (q.sizing === 'fail') === c.failures.length > 0);
     where.push({
@@ -184,7 +187,7 @@ export async function deleteString(user: SessionUser, id: number): Promise<void>
     replacements: { id },
   })) as unknown as [[{ n: number }]];
   if (Number(row.n) > 0) {
-    throw new AppError('CONFLICT', `${s.label} is on ${row.n} work order(s) and keeps its history. Archive it instead.`);
+    throw new AppError('CONFLICT', `${s.label} is on ${plural(Number(row.n), 'work order')} and keeps its history. Archive it instead.`);
   }
   await s.destroy();
 }

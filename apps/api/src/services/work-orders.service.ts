@@ -112,6 +112,9 @@ function listItem(wo: WorkOrder, labels: string[]): WorkOrderListItem {
     ...flags(wo),
     stringCount: labels.length,
     stringLabels: labels.slice(0, 3),
+    submittedAt: wo.submittedAt ? wo.submittedAt.toISOString() : null,
+    signedOffAt: wo.signedOffAt ? wo.signedOffAt.toISOString() : null,
+    isSlaMet: wo.submittedAt ? wo.submittedAt.getTime() <= wo.dueAt.getTime() : null,
     version: wo.version,
   };
 }
@@ -142,6 +145,7 @@ export async function listWorkOrders(user: SessionUser, q: ListQuery): Promise<P
   if (q.open) where.push({ status: { [Op.in]: [...openStatuses] } });
   if (q.priority?.length) where.push({ priority: { [Op.in]: q.priority } });
   if (q.siteId) where.push({ siteId: q.siteId });
+  if (q.ids?.length) where.push({ id: { [Op.in]: q.ids } });
   if (q.faultCategory) where.push({ faultCategory: q.faultCategory });
   if (q.assigneeId === 'me') where.push({ assigneeId: user.id });
   else if (q.assigneeId === 'none') where.push({ assigneeId: null });
@@ -464,7 +468,9 @@ export async function transitionWorkOrder(user: SessionUser, id: number, input: 
 export async function updateWorkOrder(user: SessionUser, id: number, input: UpdateWorkOrderInput): Promise<WorkOrderDetail> {
   const wo = await findVisible(user, id);
   if (!openStatuses.includes(wo.status)) {
-    throw new AppError('CONFLICT', `${wo.number} is ${workOrderStatusLabels[wo.status]} and can no longer be changed.`);
+    throw new AppError('CONFLICT', `${wo.number} is ${workOrderStatusLabels[wo.status]} and can no longer be changed.`, undefined, {
+      current: await getWorkOrder(user, id),
+    });
   }
   const { version, ...fields } = input;
   const changes: Partial<WorkOrder['_creationAttributes']> = {};
