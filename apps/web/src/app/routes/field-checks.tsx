@@ -47,6 +47,20 @@ export function FieldChecksRoute() {
       />
     );
   }
+  if (ticket.isPending && ticket.fetchStatus === 'paused') {
+    return (
+      <EmptyState
+        icon="inbox"
+        title="This ticket is not on this phone yet"
+        description="There is no connection, and the ticket was not opened here before. Open it once with signal and it stays available offline."
+        action={
+          <ButtonLink to={paths.home()} variant="secondary">
+            Back to my work
+          </ButtonLink>
+        }
+      />
+    );
+  }
   if (ticket.isPending) return <FieldSkeleton />;
   if (!ticket.data) {
     return (

@@ -17,7 +17,6 @@ import { Link } from 'react-router';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { Alert } from '@/components/ui/alert';
-import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { FormField, Select, Textarea } from '@/components/ui/form-field';
 import { Icon } from '@/components/ui/icon';
@@ -64,7 +63,7 @@ export type SaveOutcome = { kind: 'saved'; check: StringCheck } | { kind: 'queue
 
 function Section({ title, children, description }: { title: string; description?: string; children: React.ReactNode }) {
   return (
-    <fieldset className="flex flex-col gap-4 rounded-card border border-line bg-surface p-4">
+    <fieldset className="flex min-w-0 flex-col gap-4 rounded-card border border-line bg-surface p-4">
       <legend className="px-1 text-lg font-bold">{title}</legend>
       {description ? <p className="-mt-2 text-sm text-ink-muted">{description}</p> : null}
       {children}
@@ -359,7 +358,7 @@ function InstrumentPicker({
 }) {
   const toggle = (id: number) => onChange(selected.includes(id) ? selected.filter((x) => x !== id) : [...selected, id]);
   return (
-    <fieldset className="flex flex-col gap-2 rounded-card border border-line bg-surface p-4">
+    <fieldset className="flex min-w-0 flex-col gap-2 rounded-card border border-line bg-surface p-4">
       <legend className="px-1 text-lg font-bold">
         Instruments <span className="text-base font-normal text-ink-faint">(optional)</span>
       </legend>
@@ -389,12 +388,17 @@ function InstrumentPicker({
               >
                 <input type="checkbox" checked={isChecked} onChange={() => toggle(i.id)} className="size-6 shrink-0 accent-brand" />
                 <span className="min-w-0 flex-1">
-                  <span className="block font-semibold">
+                  <span className="block font-semibold break-words">
                     {instrumentKindLabels[i.kind]} · <span className="readings">{i.serial}</span>
                   </span>
                   {i.model ? <span className="block text-sm text-ink-muted">{i.model}</span> : null}
+                  {status.kind !== 'ok' ? (
+                    <span className={cn('mt-1 flex items-start gap-1 text-sm font-semibold', status.kind === 'overdue' ? 'text-fail' : 'text-attention')}>
+                      <Icon name={status.kind === 'overdue' ? 'fail' : 'alert'} className="mt-0.5 size-4" />
+                      {calibrationLabel(status, i.calibrationDueOn)}
+                    </span>
+                  ) : null}
                 </span>
-                {status.kind !== 'ok' ? <Badge tone={status.kind === 'overdue' ? 'fail' : 'attention'}>{calibrationLabel(status, i.calibrationDueOn)}</Badge> : null}
               </label>
             </li>
           );

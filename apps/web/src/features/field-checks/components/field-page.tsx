@@ -71,9 +71,11 @@ export function FieldPage({ ticket, userId, canRecord }: { ticket: WorkOrderDeta
         <Link to={paths.workOrder(ticket.id)} className="inline-flex min-h-touch items-center gap-1 font-semibold text-brand underline-offset-4 hover:underline">
           <Icon name="chevronLeft" /> Ticket {ticket.number}
         </Link>
-        <a href="#field-queue" className={cn('rounded-pill', ticketEntries.length === 0 && 'pointer-events-none')} aria-label={`Queue: ${ticketEntries.length} readings on this phone`}>
-          <QueueBadge entries={ticketEntries} isFlushing={snapshot.isFlushing} />
-        </a>
+        {ticketEntries.length > 0 ? (
+          <a href="#field-queue" className="rounded-pill" aria-label={`${ticketEntries.length} reading${ticketEntries.length === 1 ? '' : 's'} on this phone, not yet sent: show them`}>
+            <QueueBadge entries={ticketEntries} isFlushing={snapshot.isFlushing} className="min-h-touch px-4" />
+          </a>
+        ) : null}
       </div>
 
       <header>
@@ -141,6 +143,11 @@ export function FieldPage({ ticket, userId, canRecord }: { ticket: WorkOrderDeta
           <h2 id="strings-title" className="text-xl font-bold">
             Strings on this ticket
           </h2>
+          {checks.isPending && checks.fetchStatus === 'paused' ? (
+            <Alert tone="attention" title="Earlier checks are not on this phone">
+              You can still record new checks; they are sent when the connection returns.
+            </Alert>
+          ) : null}
           {checks.isError && !checks.data ? (
             <ErrorState title="The checks did not load" error={checks.error} onRetry={() => void checks.refetch()} isRetrying={checks.isFetching} />
           ) : null}
@@ -154,7 +161,7 @@ export function FieldPage({ ticket, userId, canRecord }: { ticket: WorkOrderDeta
                     item={s}
                     latest={latest.get(s.id)}
                     queued={queued.get(s.id) ?? []}
-                    isLoading={checks.isPending}
+                    isLoading={checks.isPending && checks.fetchStatus !== 'paused'}
                     href={paths.fieldChecks(ticket.id, { stringId: s.id })}
                   />
                 </li>
@@ -317,7 +324,12 @@ function StringView({
               <Skeleton className="h-48 w-full rounded-card" />
             </LoadingRegion>
           ) : current ? (
-            <div className={cn(justSaved === current.id && 'rounded-card ring-4 ring-brand/40')}>
+            <div className={cn('flex flex-col gap-3', justSaved === current.id && 'rounded-card ring-4 ring-brand/40')}>
+              {queued.length > 0 ? (
+                <Alert tone="attention" title="A newer reading is on this phone">
+                  Taken {formatTakenAt(queued.at(-1)!.payload.input.takenAt)}, not yet on the server. The verdict below is the last one the server has.
+                </Alert>
+              ) : null}
               <CheckResult
                 check={current}
                 actions={

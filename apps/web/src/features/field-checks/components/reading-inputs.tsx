@@ -67,7 +67,7 @@ export function ChoiceGroup<V extends string | boolean>({
 }) {
   const errorId = `${name}-error`;
   return (
-    <fieldset aria-describedby={error ? errorId : undefined} className="flex flex-col gap-1.5">
+    <fieldset aria-describedby={error ? errorId : undefined} className="flex min-w-0 flex-col gap-1.5">
       <legend className="mb-1.5 font-semibold text-ink">{legend}</legend>
       <div className="grid grid-cols-2 gap-2">
         {options.map((option) => {

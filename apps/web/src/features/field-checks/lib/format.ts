@@ -1,12 +1,14 @@
 /** Numbers for readings: fixed decimals, a real minus sign, tabular in the UI through the `readings` class. */
 export function formatNumber(value: number, decimals = 1): string {
+  // A value that rounds to zero is shown as 0, never "−0.0".
+  if (Math.abs(value) < 0.5 * 10 ** -decimals) value = 0;
   const text = new Intl.NumberFormat('en-GB', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }).format(value);
   return text.replace('-', '−');
 }
 
 /** A signed percentage: "+2.1 %", "−6.3 %". */
 export function formatDeviation(pct: number): string {
-  const rounded = Math.round(pct * 10) / 10;
+  const rounded = Math.round(pct * 10) / 10 || 0;
   const sign = rounded > 0 ? '+' : '';
   return `${sign}${formatNumber(rounded, 1)} %`;
 }
