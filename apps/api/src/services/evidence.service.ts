@@ -1,5 +1,5 @@
 import { createHash, randomUUID } from 'node:crypto';
-import sharp from 'sharp';
+import sharp, { type Metadata } from 'sharp';
 import exifr from 'exifr';
 import { classifyThermalAnomaly, type ThermalPattern } from '@stringfield/pv';
 import {
@@ -22,7 +22,7 @@ import { visibleSiteIds } from './site-access.ts';
 
 // A 12-megapixel phone photo is 4000 × 3000; 50 MP refuses decompression bombs long before memory runs out.
 const MAX_INPUT_PIXELS = 50_000_000;
-const SIZES = { original: 4096, screen: 1600, thumb: 320 } as const;
+const SIZES = { screen: 1600, thumb: 320 } as const;
 const ACCEPTED = new Set(['jpeg', 'png', 'webp']);
 
 const patternMap: Record<string, ThermalPattern> = {
@@ -49,21 +49,26 @@ type Processed = {
   gps: { lat: number; lon: number } | null;
 };
 
-async function processImage(file: UploadFile, meta: PhotoMeta, index: number): Promise<Processed> {
+/** Check, re-encode and size one uploaded image in memory; throws a 400 naming the file when it is not usable. */
+export async function processImage(file: UploadFile, meta: PhotoMeta, index: number): Promise<Processed> {
   const name = file.originalname || `file ${index + 1}`;
-  let format: string | undefined;
+  let info: Metadata;
   try {
-    format = (await sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS }).metadata()).format;
+    info = await sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS }).metadata();
   } catch (err) {
     const msg = (err as Error).message;
     if (/pixel limit/i.test(msg)) throw new AppError('VALIDATION_FAILED', `${name} has more than 50 megapixels; send a smaller image.`);
     throw new AppError('VALIDATION_FAILED', `${name} is not an image we can read (JPEG, PNG or WebP).`);
   }
+  const format = info.format;
   if (format === 'heif') {
     throw new AppError('VALIDATION_FAILED', `${name} is HEIC, which Stringfield cannot decode yet. Set the phone camera to "Most compatible" (JPEG) or send a JPEG.`);
   }
   if (!format || !ACCEPTED.has(format)) {
     throw new AppError('VALIDATION_FAILED', `${name} is ${format ? format.toUpperCase() : 'not an image'}; send JPEG, PNG or WebP photos.`);
+  }
+  if ((info.width ?? 0) * (info.height ?? 0) > MAX_INPUT_PIXELS) {
+    throw new AppError('VALIDATION_FAILED', `${name} has more than 50 megapixels; send a smaller image.`);
   }
   let exif: { DateTimeOriginal?: Date; CreateDate?: Date; latitude?: number; longitude?: number } | undefined;
   try {
@@ -72,19 +77,21 @@ async function processImage(file: UploadFile, meta: PhotoMeta, index: number): P
     exif = undefined;
   }
   try {
-    // rotate() applies the EXIF orientation; sharp writes no metadata unless asked, so EXIF is stripped.
-    const base = () => sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' }).rotate();
-    const encode = (px: number) => base().resize({ width: px, height: px, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 82, mozjpeg: true }).toBuffer({ resolveWithObject: true });
-    const [screen, thumb, normalised] = await Promise.all([encode(SIZES.screen), encode(SIZES.thumb), encode(SIZES.original)]);
+    // One decode shared by both sizes; rotate() applies the EXIF orientation, and sharp writes no
+    // metadata unless asked, so the served copies carry no EXIF. The original is kept as uploaded.
+    const upright = sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' }).rotate();
+    const encode = (px: number) => upright.clone().resize({ width: px, height: px, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 80 }).toBuffer();
+    const [screen, thumb] = await Promise.all([encode(SIZES.screen), encode(SIZES.thumb)]);
+    const isQuarterTurn = (info.orientation ?? 1) >= 5;
     const captured = exif?.DateTimeOriginal ?? exif?.CreateDate ?? null;
     return {
       meta,
       original: file.buffer,
       originalType: `image/${format}`,
-      screen: screen.data,
-      thumb: thumb.data,
-      width: normalised.info.width,
-      height: normalised.info.height,
+      screen,
+      thumb,
+      width: isQuarterTurn ? info.height! : info.width!,
+      height: isQuarterTurn ? info.width! : info.height!,
       sha256: createHash('sha256').update(file.buffer).digest('hex'),
       capturedAt: captured instanceof Date && !Number.isNaN(captured.getTime()) ? captured : null,
       gps: typeof exif?.latitude === 'number' && typeof exif.longitude === 'number' ? { lat: exif.latitude, lon: exif.longitude } : null,
