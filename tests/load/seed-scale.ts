@@ -49,7 +49,7 @@ export async function seedScale(): Promise<Record<string, number>> {
     await db.query(sql);
     log(`${label}: ${((Date.now() - t) / 1000).toFixed(1)} s`);
   };
-  const one = async (sql: string) => Number(((await db.query(sql)) as unknown as [[Record<string, number>]])[0][0]!.n);
+  const one = async (sql: string) => Number(((await db.query(sql)) as unknown as [[Record<string, number>]])[0][0].n);
   const moduleId = await one("SELECT id AS n FROM module_models WHERE model = 'SDM-405-72M'");
   const inverterModelId = await one("SELECT id AS n FROM inverter_models WHERE model = 'SDI-125K-6'");
   const dispatcherId = await one("SELECT id AS n FROM users WHERE email = 'dispatcher@stringfield.test'");
