@@ -174,7 +174,7 @@ export const workOrderListQuerySchema = z.object({
     .transform((v) => (v ? v.split(',').map(Number) : undefined))
     .pipe(z.array(z.number().int().positive({ error: 'ids: comma-separated ticket ids' })).max(500).optional()),
   sort: z
-    .enum(['dueAt', '-dueAt', 'reportedAt', '-reportedAt', 'priority', '-priority', 'number', '-number', 'status', '-status'])
+    .enum(['dueAt', '-dueAt', 'reportedAt', '-reportedAt', 'signedOffAt', '-signedOffAt', 'priority', '-priority', 'number', '-number', 'status', '-status'])
     .default('dueAt'),
 });
 

@@ -28,6 +28,9 @@ export function signOffRouter() {
   r.get('/report.pdf', requirePermission('workOrders:read'), async (req, res) => {
     const { pdf, fileName } = await buildReport(req.user!, idParams.parse(req.params).id);
     res.setHeader('Content-Type', 'application/pdf');
+    // The web app shows the report in a frame of its own origin; nothing else may frame it.
+    res.setHeader('Content-Security-Policy', "default-src 'none'; style-src 'unsafe-inline'; frame-ancestors 'self'");
+    res.setHeader('X-Frame-Options', 'SAMEORIGIN');
     res.setHeader('Content-Disposition', `inline; filename="${fileName}"`);
     res.setHeader('Cache-Control', 'private, no-store');
     res.send(pdf);

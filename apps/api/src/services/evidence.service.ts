@@ -291,7 +291,8 @@ export async function prioritySuggestion(workOrderId: number): Promise<{ priorit
 }
 
 // ---------- diode replacements ----------
-function missingOf(d: DiodeReplacement): string[] {
+/** What a diode-replacement record still lacks before a supervisor can accept it (also a sign-off gate). */
+export function missingOf(d: DiodeReplacement): string[] {
   const missing: string[] = [];
   if (!d.moduleSerial) missing.push('module serial');
   if (d.newDiodeForwardV === null) missing.push('forward voltage of the new diode');

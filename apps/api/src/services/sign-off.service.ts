@@ -25,7 +25,7 @@ import {
   WorkOrderString,
   sequelize,
 } from '../models/index.ts';
-import { visibleTicket } from './evidence.service.ts';
+import { missingOf, visibleTicket } from './evidence.service.ts';
 
 type Override = { stringId: number; reason: string };
 
@@ -33,19 +33,6 @@ async function ticketStrings(workOrderId: number) {
   const links = await WorkOrderString.findAll({ where: { workOrderId } });
   const strings = await PvString.findAll({ where: { id: links.map((l) => l.stringId) }, attributes: ['id', 'label'], order: [['label', 'ASC']] });
   return strings;
-}
-
-function diodeMissing(d: DiodeReplacement): string[] {
-  const removed = JSON.parse(d.removedPartJson) as Record<string, unknown>;
-  return [
-    !d.moduleSerial && 'module serial',
-    d.newDiodeForwardV === null && 'forward voltage of the new diode',
-    d.vocBeforeV === null && 'Voc before',
-    d.vocAfterV === null && 'Voc after',
-    !d.beforePhotoId && 'photo before',
-    !d.afterPhotoId && 'photo after',
-    !removed.partNumber && 'removed part number',
-  ].filter((x): x is string => Boolean(x));
 }
 
 /** The evidence gates of sign-off, each with what is missing; overrides only ever lift the after-check gate. */
@@ -83,7 +70,7 @@ export async function evaluateGates(wo: WorkOrder, overrides: Override[] = []): 
     label: 'Every bypass-diode replacement record is complete',
     ok: true,
     missing: diodes
-      .map((d) => ({ d, missing: diodeMissing(d) }))
+      .map((d) => ({ d, missing: missingOf(d) }))
       .filter((x) => x.missing.length > 0)
       .map(({ d, missing }) => ({
         message: `${labelOf.get(d.stringId) ?? 'String'} module ${d.modulePosition}, diode ${d.diodePosition}: missing ${missing.join(', ')}`,

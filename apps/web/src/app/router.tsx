@@ -222,6 +222,55 @@ export const router = createBrowserRouter([
                   };
                 },
               },
+              {
+                path: routes.reports,
+                lazy: async () => {
+                  const { ReportsRoute } = await import('./routes/reports');
+                  return {
+                    element: (
+                      <RequirePermission action="workOrders:read" pageName="Reports">
+                        <ReportsRoute />
+                      </RequirePermission>
+                    ),
+                  };
+                },
+              },
+              // Fleet view: lazy, so no technician's phone downloads the map or the charts.
+              {
+                path: routes.fleet,
+                lazy: async () => {
+                  const { FleetRoute } = await import('./routes/fleet');
+                  return { element: <RequirePermission action="fleet:read" pageName="Fleet"><FleetRoute /></RequirePermission> };
+                },
+              },
+              {
+                path: routes.fleetSite,
+                lazy: async () => {
+                  const { FleetSiteRoute } = await import('./routes/fleet-site');
+                  return { element: <RequirePermission action="fleet:read" pageName="String health map"><FleetSiteRoute /></RequirePermission> };
+                },
+              },
+              {
+                path: routes.fleetMetrics,
+                lazy: async () => {
+                  const { FleetMetricsRoute } = await import('./routes/fleet-metrics');
+                  return { element: <RequirePermission action="fleet:read" pageName="Fleet metrics"><FleetMetricsRoute /></RequirePermission> };
+                },
+              },
+              {
+                path: routes.fleetEnergy,
+                lazy: async () => {
+                  const { FleetEnergyRoute } = await import('./routes/fleet-energy');
+                  return { element: <RequirePermission action="fleet:read" pageName="Energy at risk"><FleetEnergyRoute /></RequirePermission> };
+                },
+              },
+              {
+                path: routes.fleetExports,
+                lazy: async () => {
+                  const { FleetExportsRoute } = await import('./routes/fleet-exports');
+                  return { element: <RequirePermission action="exports:read" pageName="Exports"><FleetExportsRoute /></RequirePermission> };
+                },
+              },
               { path: routes.settings, lazy: async () => ({ Component: (await import('./routes/settings')).SettingsRoute }) },
               { path: '*', element: <NotFoundRoute /> },
             ],

@@ -23,7 +23,13 @@ export const routes = {
   workOrder: '/work-orders/:workOrderId',
   fieldChecks: '/work-orders/:workOrderId/field',
   instruments: '/instruments',
+  reports: '/reports',
   settings: '/settings',
+  fleet: '/fleet',
+  fleetSite: '/fleet/sites/:siteId',
+  fleetMetrics: '/fleet/metrics',
+  fleetEnergy: '/fleet/energy',
+  fleetExports: '/fleet/exports',
 } as const;
 
 type SearchValue = string | number | boolean | null | undefined;
@@ -85,4 +91,28 @@ export const paths = {
   instruments: () => routes.instruments,
   newWorkOrder: (search: { siteId?: number } = {}) => `${routes.newWorkOrder}${toSearch(search)}`,
   settings: () => routes.settings,
+  /** Fleet overview: every visible site with its energy at risk. */
+  fleet: () => routes.fleet,
+  /** A site's string health map; `search` holds the map filters (see fleet map-params). */
+  fleetSite: (siteId: number, search: Record<string, SearchValue> = {}) => `/fleet/sites/${siteId}${toSearch(search)}`,
+  fleetMetrics: (search: Record<string, SearchValue> = {}) => `${routes.fleetMetrics}${toSearch(search)}`,
+  fleetEnergy: (search: Record<string, SearchValue> = {}) => `${routes.fleetEnergy}${toSearch(search)}`,
+  fleetExports: (search: Record<string, SearchValue> = {}) => `${routes.fleetExports}${toSearch(search)}`,
+  /** The asset owner's close-out reports, per site; `page` pages each site's list. */
+  reports: (search: { siteId?: number; page?: number } = {}) =>
+    `${routes.reports}${toSearch({ siteId: search.siteId, page: search.page === 1 ? undefined : search.page })}`,
+} as const;
+
+/**
+ * In-page anchors of the ticket page, so the sign-off checklist can point at the panel where a
+ * missing item is fixed without the panels knowing each other.
+ */
+export const ticketAnchors = {
+  string: (stringId: number) => `string-${stringId}`,
+  gallery: 'evidence-gallery',
+  upload: 'photo-upload',
+  diodes: 'diode-records',
+  diode: (diodeId: number) => `diode-${diodeId}`,
+  signOff: 'sign-off',
+  report: 'close-out-report',
 } as const;

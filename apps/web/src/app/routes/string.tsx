@@ -5,6 +5,7 @@ import { Icon } from '@/components/ui/icon';
 import { PageHeader } from '@/components/ui/page-header';
 import { LoadingRegion, Skeleton } from '@/components/ui/skeleton';
 import { LoadError } from '@/features/assets/components/load-error';
+import { StringDiodeHistory } from '@/features/evidence/components/string-diode-history';
 import { paths } from '@/config/paths';
 import { useString } from '@/features/assets/api/get-string';
 import { SizingChecksTable } from '@/features/assets/components/sizing-checks-table';
@@ -83,6 +84,14 @@ function StringPage({ stringId }: { stringId: number }) {
       </section>
 
       <StringWorkbench string={s} />
+
+      <section aria-labelledby="diode-history-heading" className="mt-8">
+        <h2 id="diode-history-heading" className="mb-1 text-xl font-semibold">
+          Diode replacements
+        </h2>
+        <p className="mb-3 max-w-prose text-ink-muted">Bypass diodes replaced on this string, with the parts and the Voc before and after.</p>
+        <StringDiodeHistory stringId={s.id} />
+      </section>
     </>
   );
 }

@@ -142,6 +142,13 @@ const paths = {
   arrowRight: <path d="M4 12h15M13 6l6 6-6 6" />,
   undo: <path d="M9 14 4 9l5-5M4 9h10a6 6 0 0 1 0 12h-3" />,
   pause: <path d="M8 5v14M16 5v14" />,
+  more: (
+    <>
+      <circle cx="5" cy="12" r="1.6" fill="currentColor" />
+      <circle cx="12" cy="12" r="1.6" fill="currentColor" />
+      <circle cx="19" cy="12" r="1.6" fill="currentColor" />
+    </>
+  ),
 } as const;
 
 export type IconName = keyof typeof paths;

@@ -29,6 +29,8 @@ const sortLabels: Record<WorkOrderSort, string> = {
   '-priority': 'P4 first',
   '-reportedAt': 'Newest reported',
   reportedAt: 'Oldest reported',
+  '-signedOffAt': 'Latest signed off',
+  signedOffAt: 'Earliest signed off',
   '-number': 'Highest number',
   number: 'Lowest number',
   status: 'Status, in order',

@@ -15,7 +15,7 @@ import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Icon } from '@/components/ui/icon';
-import { paths } from '@/config/paths';
+import { paths, ticketAnchors } from '@/config/paths';
 import { isApiError } from '@/lib/api-client';
 import { isConflict } from '../api/conflict';
 import { useTransitionWorkOrder } from '../api/transition-work-order';
@@ -79,9 +79,21 @@ export function WorkOrderView({
   role,
   onReload,
   isReloading,
+  headerActions,
+  panels,
+  asidePanels,
+  hiddenTransitions,
 }: {
   ticket: WorkOrderDetail;
   role: Role;
+  /** Extra actions beside the transitions (e.g. the technician's "Field checks" link), composed by the route. */
+  headerActions?: ReactNode;
+  /** Panels of other features (evidence, sign-off) shown after the strings, composed by the route. */
+  panels?: ReactNode;
+  /** Panels shown in the side column under the ticket details (e.g. the close-out report). */
+  asidePanels?: ReactNode;
+  /** Transitions another panel offers instead of the bar (sign-off, with its checklist and overrides). */
+  hiddenTransitions?: readonly WorkOrderDetail['status'][];
   /** Fetches the ticket again and resolves with the fresh copy. */
   onReload: () => Promise<WorkOrderDetail | undefined>;
   isReloading: boolean;
@@ -96,7 +108,10 @@ export function WorkOrderView({
   const [pendingTo, setPendingTo] = useState<TransitionAction['to'] | undefined>();
   const [hasReloaded, setHasReloaded] = useState(false);
 
-  const actions = transitionActions(ticket.allowedTransitions, ticket.status);
+  const actions = transitionActions(
+    ticket.allowedTransitions.filter((t) => !hiddenTransitions?.includes(t.to)),
+    ticket.status,
+  );
   const isOpen = openStatuses.includes(ticket.status);
   const canEdit = can(role, 'workOrders:dispatch') && isOpen;
   const canComment = can(role, 'workOrders:comment');
@@ -207,6 +222,14 @@ export function WorkOrderView({
           <p className="whitespace-pre-wrap [overflow-wrap:anywhere]">{ticket.returnReason}</p>
         </Alert>
       ) : null}
+      {canEdit && ticket.prioritySuggestion && ticket.priority !== ticket.prioritySuggestion.priority ? (
+        <Alert tone="attention" title={`Raise to ${ticket.prioritySuggestion.priority}?`}>
+          <p className="[overflow-wrap:anywhere]">{ticket.prioritySuggestion.reason}</p>
+          <Button variant="secondary" className="mt-2" onClick={() => setEditing({ version: ticket.version })}>
+            <Icon name="pencil" /> Change the priority
+          </Button>
+        </Alert>
+      ) : null}
       {ticket.status === 'cancelled' && ticket.cancelReason ? (
         <Alert tone="info" title="Cancelled">
           <p className="whitespace-pre-wrap [overflow-wrap:anywhere]">{ticket.cancelReason}</p>
@@ -237,8 +260,9 @@ export function WorkOrderView({
             </p>
           </div>
         </div>
-        {actions.length > 0 || canEdit ? (
+        {actions.length > 0 || canEdit || headerActions ? (
           <div className="flex flex-col gap-3 border-t border-line pt-4 sm:flex-row sm:flex-wrap sm:items-center">
+            {headerActions}
             <TransitionBar actions={actions} onAction={onAction} pendingTo={dialog ? undefined : pendingTo} />
             {canEdit ? (
               <Button
@@ -258,7 +282,7 @@ export function WorkOrderView({
           <Section title={ticket.strings.length === 1 ? 'String' : `Strings (${ticket.strings.length})`}>
             <ul className="flex flex-col divide-y divide-line rounded-card border border-line bg-surface shadow-card">
               {ticket.strings.map((s) => (
-                <li key={s.id} className="flex flex-col gap-1 px-4 py-3">
+                <li key={s.id} id={ticketAnchors.string(s.id)} className="flex scroll-mt-24 flex-col gap-1 px-4 py-3 target:bg-brand-soft">
                   <div className="flex flex-wrap items-baseline justify-between gap-x-3">
                     <Link
                       to={paths.string(s.id)}
@@ -284,6 +308,8 @@ export function WorkOrderView({
             </Section>
           ) : null}
 
+          {panels}
+
           <Section title="History and comments">
             <div className="flex flex-col gap-6">
               <WorkOrderTimeline ticket={ticket} />
@@ -292,7 +318,7 @@ export function WorkOrderView({
           </Section>
         </div>
 
-        <aside aria-label="Ticket details">
+        <aside aria-label="Ticket details" className="flex flex-col gap-6">
           <Card className="p-4">
             <dl className="flex flex-col gap-3">
               {(
@@ -322,6 +348,7 @@ export function WorkOrderView({
               ))}
             </dl>
           </Card>
+          {asidePanels}
         </aside>
       </div>
 
