@@ -1,7 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { expectedString } from '@stringfield/pv';
-import { PvString, Site, StringCheck, User, WorkOrder, WorkOrderString } from '../../apps/api/src/models/index.ts';
+import { PvString, Site, StringCheck, User, WorkOrder, WorkOrderString, sequelize } from '../../apps/api/src/models/index.ts';
+import { REPEAT_BACKFILL_SQL } from '../../apps/api/src/lib/repeat-faults.ts';
 import { demoEmail, errorOf, resetDatabase, signIn, type Agent } from './helpers.ts';
 
 let admin: Agent;
@@ -59,6 +60,9 @@ beforeAll(async () => {
   await ticket(2, { reportedAt: at('2026-10-05T08:00:00'), dispatchedAt: at('2026-10-05T12:00:00'), submittedAt: at('2026-10-06T08:00:00'), signedOffAt: at('2026-10-06T20:00:00'), returnCount: 1 }, s2.id);
   t3 = await ticket(3, { faultCategory: 'open_circuit', status: 'in_field', reportedAt: at('2026-10-20T08:00:00'), dispatchedAt: at('2026-10-20T09:00:00'), dueAt: at('2026-10-21T08:00:00') }, s1.id);
   await ticket(4, { reportedAt: at('2026-09-15T08:00:00'), dispatchedAt: at('2026-09-15T09:00:00'), submittedAt: at('2026-09-15T10:00:00'), signedOffAt: at('2026-09-16T08:00:00') }, s2.id);
+
+  // Fixtures are written straight to the tables, so mark repeats the way bulk loads do.
+  await sequelize.query(REPEAT_BACKFILL_SQL);
 
   const check = (stringId: number, workOrderId: number, verdict: 'pass' | 'fail', vocDeviationPct: number, takenAt: string) =>
     StringCheck.create({

@@ -149,7 +149,7 @@ async function main() {
     const target = (await (await dispatcher.request('GET', '/api/sites?q=Z050&pageSize=1')).json()) as { items: Array<{ id: number }> };
     const inverters = (await (await dispatcher.request('GET', `/api/inverters?siteId=${target.items[0]!.id}`)).json()) as Array<{ tag: string }>;
     const rows = ['label,inverter,mppt_input,module_model,modules_in_series'];
-    for (let i = 0; i < 5000; i += 1) rows.push(`IMP-${String(i).padStart(5, '0')},${inverters[i % inverters.length]!.tag},${1 + (i % 6)},SDM-405-72M,25`);
+    for (let i = 0; i < 5000; i += 1) rows.push(`IMP${Date.now().toString(36)}-${String(i).padStart(5, '0')},${inverters[i % inverters.length]!.tag},${1 + (i % 6)},SDM-405-72M,25`);
     const csv = new Blob([rows.join('\n')], { type: 'text/csv' });
     for (const mode of ['dry-run', 'commit'] as const) {
       const form = new FormData();

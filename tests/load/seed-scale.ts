@@ -120,6 +120,8 @@ export async function seedScale(): Promise<Record<string, number>> {
             ELT(1 + seq % 10, 'pass','pass','pass','pass','pass','pass','pass','attention','attention','fail'), '[]', '[]', 0, '1.0.0', NULL, NULL, NOW(), NOW()
        FROM seq_1_to_${scale.checks}`,
   );
+  const { REPEAT_BACKFILL_SQL } = await import('../../apps/api/src/lib/repeat-faults.ts');
+  await q('repeat faults', REPEAT_BACKFILL_SQL);
   await db.query('SET SESSION foreign_key_checks = 1, unique_checks = 1');
   await q('analyze tables', 'ANALYZE TABLE work_orders, work_order_strings, string_checks, pv_strings');
   const counts = {

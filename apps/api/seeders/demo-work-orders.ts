@@ -3,6 +3,7 @@ import type { Transaction } from 'sequelize';
 import { defaultSlaHours, type FaultCategory, type Priority, type WorkOrderStatus } from '@stringfield/shared';
 import { PvString, Site, User, WorkOrder, sequelize } from '../src/models/index.ts';
 import { reserveNumbers } from '../src/services/work-orders.service.ts';
+import { REPEAT_BACKFILL_SQL } from '../src/lib/repeat-faults.ts';
 
 type Step = { to: WorkOrderStatus; by: string; hoursAfterReport: number; reason?: string };
 type DemoTicket = {
@@ -162,5 +163,6 @@ export async function seedDemoWorkOrders(transaction: Transaction): Promise<numb
     ];
     await qi.bulkInsert('work_order_events', events, { transaction });
   }
+  await sequelize.query(REPEAT_BACKFILL_SQL, { transaction });
   return tickets.length;
 }

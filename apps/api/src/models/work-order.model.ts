@@ -80,6 +80,8 @@ export class WorkOrderString extends Model<InferAttributes<WorkOrderString>, Inf
   declare workOrderId: number;
   declare stringId: number;
   declare symptom: string;
+  /** The signed-off ticket this one repeats on the same string (within 90 days), if any. */
+  declare repeatOfId: CreationOptional<number | null>;
 
   static initModel(sequelize: Sequelize) {
     WorkOrderString.init(
@@ -87,6 +89,7 @@ export class WorkOrderString extends Model<InferAttributes<WorkOrderString>, Inf
         workOrderId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
         stringId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
         symptom: { type: DataTypes.STRING(500), allowNull: false, defaultValue: '' },
+        repeatOfId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
       },
       { sequelize, tableName: 'work_order_strings', underscored: true, timestamps: false },
     );

@@ -167,18 +167,15 @@ export async function metrics(user: SessionUser, q: MetricsQuery): Promise<Metri
       `SELECT COUNT(*) AS signed, COALESCE(SUM(w.return_count = 0), 0) AS clean
          FROM work_orders w WHERE w.status = 'signed_off' AND w.signed_off_at >= :from AND w.signed_off_at < :to ${scope}`,
     ),
-    // A repeat: a ticket reported in the period on a string that had a ticket signed off in the 90 days before.
+    // A repeat: a ticket reported in the period on a string with a sign-off in the 90 days before
+    // (marked on the ticket's string when the ticket is created).
     select<{ string_id: number; label: string; code: string; repeats: number }>(
       `SELECT s.id AS string_id, s.label, st.code, COUNT(*) AS repeats
-         FROM work_orders w
-         JOIN work_order_strings ws ON ws.work_order_id = w.id
+         FROM work_order_strings ws
+         JOIN work_orders w ON w.id = ws.work_order_id
          JOIN pv_strings s ON s.id = ws.string_id
          JOIN sites st ON st.id = s.site_id
-        WHERE w.reported_at >= :from AND w.reported_at < :to ${scope}
-          AND EXISTS (
-            SELECT 1 FROM work_order_strings wsp JOIN work_orders wp ON wp.id = wsp.work_order_id
-             WHERE wsp.string_id = ws.string_id AND wsp.work_order_id <> w.id AND wp.status = 'signed_off'
-               AND wp.signed_off_at < w.reported_at AND wp.signed_off_at >= DATE_SUB(w.reported_at, INTERVAL 90 DAY))
+        WHERE ws.repeat_of_id IS NOT NULL AND w.reported_at >= :from AND w.reported_at < :to ${scope}
         GROUP BY s.id, s.label, st.code ORDER BY repeats DESC, s.label LIMIT 50`,
     ),
     select<{ fault_category: FaultCategory; n: number }>(

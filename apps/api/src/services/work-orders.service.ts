@@ -24,6 +24,7 @@ import {
 } from '@stringfield/shared';
 import type { z } from 'zod';
 import { AppError, notFound } from '../lib/app-error.ts';
+import { REPEAT_BACKFILL_SQL } from '../lib/repeat-faults.ts';
 import { queueMail } from '../lib/mailer.ts';
 import { assignmentMail, returnMail, submissionMail } from '../lib/mail-templates.ts';
 import {
@@ -323,6 +324,7 @@ export async function createWorkOrders(user: SessionUser, input: CreateWorkOrder
         group.map((s) => ({ workOrderId: wo.id, stringId: s.stringId, symptom: s.symptom })),
         { transaction },
       );
+      await sequelize.query(`${REPEAT_BACKFILL_SQL} AND ws.work_order_id = :id`, { replacements: { id: wo.id }, transaction });
       await WorkOrderEvent.create(
         { workOrderId: wo.id, actorId: user.id, type: 'created', fromStatus: null, toStatus: 'reported', changes: null, comment: null },
         { transaction },
