@@ -138,7 +138,12 @@ test('a Voc one substring short is judged Fail with the substring finding, in th
   await expect(vocRow.getByRole('cell').nth(0)).toHaveText(
     `${Number(measured).toLocaleString('en-GB', { minimumFractionDigits: 1 })} V`,
   );
-  await page.screenshot({ path: screenshotPath('field-checks-form-preview-360'), fullPage: true });
+  // A screen's worth with the preview on top: in a full-page picture the sticky Save bar would sit over it.
+  await preview.evaluate((el) => {
+    el.scrollIntoView({ block: 'start' });
+    window.scrollBy(0, -80);
+  });
+  await page.screenshot({ path: screenshotPath('field-checks-form-preview-360') });
 
   await form.getByRole('button', { name: 'Save check' }).click();
   const saved = page.getByRole('region', { name: 'Saved verdict' });
@@ -308,13 +313,11 @@ test('an I-V trace CSV uploaded to a saved check is analysed and drawn', async (
   await expect(page.getByRole('region', { name: 'Saved verdict' })).toBeVisible();
 
   const trace = page.getByRole('region', { name: 'I-V trace' });
-  await trace
-    .getByLabel('CSV from the I-V tracer')
-    .setInputFiles({
-      name: 'iv-trace-generated.csv',
-      mimeType: 'text/csv',
-      buffer: Buffer.from(csv, 'utf8'),
-    });
+  await trace.getByLabel('CSV from the I-V tracer').setInputFiles({
+    name: 'iv-trace-generated.csv',
+    mimeType: 'text/csv',
+    buffer: Buffer.from(csv, 'utf8'),
+  });
   await trace.getByRole('button', { name: 'Upload and analyse' }).click();
   await expect(page.getByText('I-V trace analysed')).toBeVisible();
 
