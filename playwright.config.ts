@@ -28,6 +28,6 @@ export default defineConfig({
     timeout: 120_000,
     stdout: 'ignore',
     stderr: 'pipe',
-    env: { E2E_PORT: String(port) },
+    env: { E2E_PORT: String(port), E2E_MAIL_PORT: process.env.E2E_MAIL_PORT ?? '1027' },
   },
 });

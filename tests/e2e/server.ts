@@ -8,13 +8,14 @@ import { Sequelize } from 'sequelize';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const port = process.env.E2E_PORT ?? '8091';
+const mailPort = Number(process.env.E2E_MAIL_PORT ?? 1027);
 export const e2eEnv = {
   NODE_ENV: 'test',
   LOG_LEVEL: 'warn',
   DB_NAME: 'stringfield_e2e',
   PORT: port,
   APP_URL: `http://127.0.0.1:${port}`,
-  SMTP_URL: 'smtp://127.0.0.1:1027',
+  SMTP_URL: `smtp://127.0.0.1:${mailPort}`,
   MAIL_CATCHER_DIR: path.join(root, '.data/mail-e2e'),
   SESSION_SECRET: 'stringfield-e2e-tests-session-secret-0123456789',
 };
@@ -39,6 +40,6 @@ await seedDemo();
 
 await fs.rm(e2eEnv.MAIL_CATCHER_DIR, { recursive: true, force: true });
 const { startMailCatcher } = await import('../../scripts/mail-catcher.ts');
-await startMailCatcher({ port: 1027, dir: e2eEnv.MAIL_CATCHER_DIR });
+await startMailCatcher({ port: mailPort, dir: e2eEnv.MAIL_CATCHER_DIR });
 
 await import('../../apps/api/src/server.ts');
