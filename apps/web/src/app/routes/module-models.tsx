@@ -1,134 +1,29 @@
 import { can, type ModuleModel } from '@stringfield/shared';
-import { useState } from 'react';
-import { useSearchParams } from 'react-router';
-import { toast } from 'sonner';
-import { Button } from '@/components/ui/button';
-import { EmptyState } from '@/components/ui/empty-state';
-import { ErrorState } from '@/components/ui/error-state';
-import { Icon } from '@/components/ui/icon';
-import { PageHeader } from '@/components/ui/page-header';
-import { Pagination } from '@/components/ui/pagination';
-import { toSearch } from '@/config/paths';
 import { useDeleteModuleModel } from '@/features/assets/api/delete-module-model';
 import { useModuleModels } from '@/features/assets/api/get-module-models';
 import { useSetModuleModelArchived } from '@/features/assets/api/set-module-model-archived';
-import { DeleteDatasheetDialog } from '@/features/assets/components/delete-datasheet-dialog';
-import { LibraryActionsContext } from '@/features/assets/components/library-actions-context';
-import { LibraryFilters } from '@/features/assets/components/library-filters';
-import { LibraryTabs } from '@/features/assets/components/library-tabs';
+import { DatasheetLibraryPage, type DatasheetLibraryKind } from '@/features/assets/components/datasheet-library-page';
 import { ModuleModelDialog } from '@/features/assets/components/module-model-dialog';
 import { ModuleModelsTable } from '@/features/assets/components/module-models-table';
-import { libraryListSearch, parseLibraryListParams, type LibraryListParams } from '@/features/assets/lib/list-params';
 import { useSessionUser } from '../session';
+
+const modules: DatasheetLibraryKind<ModuleModel> = {
+  noun: 'module',
+  plural: 'modules',
+  archivedFor: 'strings',
+  searchPlaceholder: 'Maker or model, like SDM-405',
+  errorTitle: 'Module datasheets did not load',
+  emptyTitle: 'No module datasheets yet',
+  emptyDescription: 'Add the modules of your plants before importing their layouts.',
+  useModels: useModuleModels,
+  useSetArchived: useSetModuleModelArchived,
+  useDelete: useDeleteModuleModel,
+  Table: ModuleModelsTable,
+  Dialog: ModuleModelDialog,
+};
 
 /** The module datasheet library: every model strings can be built from. */
 export function ModuleModelsRoute() {
   const user = useSessionUser();
-  const canWrite = can(user.role, 'assets:write');
-  const [searchParams, setSearchParams] = useSearchParams();
-  const params = parseLibraryListParams(searchParams);
-  const models = useModuleModels(params);
-  const archive = useSetModuleModelArchived();
-  const remove = useDeleteModuleModel();
-  const [editing, setEditing] = useState<{ model: ModuleModel | null } | null>(null);
-  const [deleting, setDeleting] = useState<ModuleModel | null>(null);
-
-  const update = (changes: Partial<LibraryListParams>, options: { replace?: boolean } = {}) =>
-    setSearchParams(toSearch(libraryListSearch({ ...params, page: 1, ...changes })), { replace: options.replace ?? false, preventScrollReset: true });
-
-  const toggleArchived = (model: ModuleModel) =>
-    archive.mutate(
-      { id: model.id, isArchived: !model.isArchived },
-      {
-        onSuccess: (saved) => toast.success(saved.isArchived ? `${saved.model} is archived: no longer offered for new strings` : `${saved.model} is back in the library`),
-        onError: (error) => toast.error(`${model.model} was not changed`, { description: error.message }),
-      },
-    );
-
-  const closeDelete = () => {
-    setDeleting(null);
-    remove.reset();
-  };
-
-  const data = models.data;
-  const addButton = canWrite ? (
-    <Button variant="primary" onClick={() => setEditing({ model: null })}>
-      <Icon name="plus" /> Add module
-    </Button>
-  ) : null;
-
-  return (
-    <>
-      <PageHeader title="Datasheets" description="Module and inverter datasheets the sizing checks and expected values are computed from." actions={addButton} />
-      <LibraryTabs />
-      <LibraryFilters value={params} placeholder="Maker or model, like SDM-405" onChange={(changes) => update(changes, { replace: 'q' in changes })} />
-
-      {models.isError && !data ? (
-        <ErrorState title="Module datasheets did not load" error={models.error} onRetry={() => void models.refetch()} isRetrying={models.isFetching} />
-      ) : (
-        <LibraryActionsContext
-          value={{
-            canWrite,
-            onEdit: (model: ModuleModel) => setEditing({ model }),
-            onToggleArchived: toggleArchived,
-            onDelete: setDeleting,
-            pendingId: archive.isPending ? (archive.variables?.id ?? null) : null,
-          }}
-        >
-          <ModuleModelsTable
-            models={data?.items ?? []}
-            isLoading={models.isPending}
-            isFetching={models.isPlaceholderData}
-            emptyState={
-              params.q ? (
-                <EmptyState
-                  icon="search"
-                  title={`No module matches “${params.q}”`}
-                  description={params.includeArchived ? 'Try the maker or part of the model name.' : 'It may be archived: tick “Show archived”.'}
-                  action={
-                    <Button variant="secondary" onClick={() => update({ q: '' })}>
-                      Clear search
-                    </Button>
-                  }
-                />
-              ) : (
-                <EmptyState icon="file" title="No module datasheets yet" description="Add the modules of your plants before importing their layouts." action={addButton} />
-              )
-            }
-          />
-          {data && data.total > 0 ? (
-            <Pagination className="mt-5" page={data.page} pageSize={data.pageSize} total={data.total} itemLabel="modules" onPageChange={(page) => update({ page })} />
-          ) : null}
-        </LibraryActionsContext>
-      )}
-
-      {canWrite ? (
-        <>
-          <ModuleModelDialog isOpen={editing !== null} model={editing?.model ?? null} onClose={() => setEditing(null)} />
-          <DeleteDatasheetDialog
-            isOpen={deleting !== null}
-            name={deleting?.model ?? ''}
-            isArchived={deleting?.isArchived ?? false}
-            error={remove.error}
-            isDeleting={remove.isPending}
-            onClose={closeDelete}
-            onDelete={() => {
-              if (!deleting) return;
-              remove.mutate(deleting.id, {
-                onSuccess: () => {
-                  toast.success(`${deleting.model} is deleted`);
-                  closeDelete();
-                },
-              });
-            }}
-            onArchive={() => {
-              if (!deleting) return;
-              toggleArchived(deleting);
-              closeDelete();
-            }}
-          />
-        </>
-      ) : null}
-    </>
-  );
+  return <DatasheetLibraryPage kind={modules} canWrite={can(user.role, 'assets:write')} />;
 }

@@ -1,29 +1,14 @@
-import { pageOf, inverterModelSchema } from '@stringfield/shared';
-import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
+import { inverterModelSchema } from '@stringfield/shared';
+import { useQuery } from '@tanstack/react-query';
 import type { LibraryListParams } from '../lib/list-params';
 import { assetKeys } from './keys';
+import { libraryListQuery } from './library-list-query';
 
-const pageSchema = pageOf(inverterModelSchema);
+const list = libraryListQuery('/api/inverter-models', inverterModelSchema, assetKeys.inverterModelList);
 
-export function getInverterModels(params: LibraryListParams, signal?: AbortSignal) {
-  return api.get('/api/inverter-models', pageSchema, {
-    signal,
-    query: {
-      q: params.q.trim() || undefined,
-      includeArchived: params.includeArchived ? 'true' : undefined,
-      page: params.page,
-      pageSize: params.pageSize,
-    },
-  });
-}
+export const getInverterModels = list.fetchPage;
 
-export const inverterModelsQueryOptions = (params: LibraryListParams) =>
-  queryOptions({
-    queryKey: assetKeys.inverterModelList(params),
-    queryFn: ({ signal }) => getInverterModels(params, signal),
-    placeholderData: keepPreviousData,
-  });
+export const inverterModelsQueryOptions = list.options;
 
 export function useInverterModels(params: LibraryListParams) {
   return useQuery(inverterModelsQueryOptions(params));

@@ -1,29 +1,14 @@
-import { pageOf, moduleModelSchema } from '@stringfield/shared';
-import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
+import { moduleModelSchema } from '@stringfield/shared';
+import { useQuery } from '@tanstack/react-query';
 import type { LibraryListParams } from '../lib/list-params';
 import { assetKeys } from './keys';
+import { libraryListQuery } from './library-list-query';
 
-const pageSchema = pageOf(moduleModelSchema);
+const list = libraryListQuery('/api/module-models', moduleModelSchema, assetKeys.moduleModelList);
 
-export function getModuleModels(params: LibraryListParams, signal?: AbortSignal) {
-  return api.get('/api/module-models', pageSchema, {
-    signal,
-    query: {
-      q: params.q.trim() || undefined,
-      includeArchived: params.includeArchived ? 'true' : undefined,
-      page: params.page,
-      pageSize: params.pageSize,
-    },
-  });
-}
+export const getModuleModels = list.fetchPage;
 
-export const moduleModelsQueryOptions = (params: LibraryListParams) =>
-  queryOptions({
-    queryKey: assetKeys.moduleModelList(params),
-    queryFn: ({ signal }) => getModuleModels(params, signal),
-    placeholderData: keepPreviousData,
-  });
+export const moduleModelsQueryOptions = list.options;
 
 export function useModuleModels(params: LibraryListParams) {
   return useQuery(moduleModelsQueryOptions(params));
