@@ -31,11 +31,15 @@ export function screenshotPath(name: string) {
 // ---------- API shortcuts, for the set-up a test is not about ----------
 
 type Json = Record<string, unknown>;
+/** One file part of a multipart request. */
+export type UploadPart = { name: string; mimeType: string; buffer: Buffer };
 
 /** A signed-in API session of one demo user, apart from the browser page (its own cookie jar). */
 export type ApiSession = {
   get<T = Json>(path: string): Promise<T>;
   post<T = Json>(path: string, body: unknown): Promise<T>;
+  /** A multipart POST (e.g. a photo upload: `files` parts plus a JSON `meta` field). */
+  postMultipart<T = Json>(path: string, multipart: Record<string, string | UploadPart>): Promise<T>;
   dispose(): Promise<void>;
 };
 
@@ -70,6 +74,14 @@ export async function apiSignIn(
       if (response.status() === 403) {
         token = await csrf();
         response = await ctx.post(path, { data: body, headers: { 'x-csrf-token': token } });
+      }
+      return readJson<T>(response, `POST ${path}`);
+    },
+    postMultipart: async <T>(path: string, multipart: Record<string, string | UploadPart>) => {
+      let response = await ctx.post(path, { multipart, headers: { 'x-csrf-token': token } });
+      if (response.status() === 403) {
+        token = await csrf();
+        response = await ctx.post(path, { multipart, headers: { 'x-csrf-token': token } });
       }
       return readJson<T>(response, `POST ${path}`);
     },
@@ -155,4 +167,27 @@ export async function openDispatchedTicket(
 /** A short suffix that keeps labels and titles of one run apart from those of the other tests. */
 export function uniqueSuffix(): string {
   return `${Date.now().toString(36).slice(-5)}${Math.floor(Math.random() * 36 ** 2).toString(36)}`.toUpperCase();
+}
+
+/**
+ * A small JPEG made on the spot (sharp): a colour field with a random speckle, so that no two
+ * photos of a run share a checksum.
+ */
+export async function makeJpeg(
+  colour: { r: number; g: number; b: number },
+  size: { width: number; height: number } = { width: 640, height: 480 },
+): Promise<Buffer> {
+  const { default: sharp } = await import('sharp');
+  const speckle = Buffer.alloc(32 * 32 * 3);
+  for (let i = 0; i < speckle.length; i += 1) speckle[i] = Math.floor(Math.random() * 256);
+  const tile = await sharp(speckle, { raw: { width: 32, height: 32, channels: 3 } }).png().toBuffer();
+  return sharp({ create: { ...size, channels: 3, background: colour } })
+    .composite([{ input: tile, top: Math.floor(Math.random() * (size.height - 32)), left: Math.floor(Math.random() * (size.width - 32)) }])
+    .jpeg({ quality: 80 })
+    .toBuffer();
+}
+
+/** The ticket as the API holds it now (its version moves with every change). */
+export async function currentTicket(api: ApiSession, id: number): Promise<Ticket> {
+  return api.get<Ticket>(`/api/work-orders/${id}`);
 }
