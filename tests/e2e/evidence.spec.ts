@@ -144,7 +144,7 @@ test('photos upload one by one, a hot junction box is CoA 3, and a diode record 
     const select = form.getByLabel(field);
     const option = select.locator('option', { hasText: caption });
     await expect(option).toHaveCount(1);
-    await select.selectOption((await option.getAttribute('value'))!);
+    await select.selectOption((await option.getAttribute('value')));
   }
   // The matching tag is listed first.
   await expect(form.getByLabel('Photo after').locator('option').nth(1)).toContainText('After repair');
