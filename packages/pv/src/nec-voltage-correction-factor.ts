@@ -1,7 +1,7 @@
 import { assertNumber } from './assert-number.ts';
 
 // NEC (NFPA 70) Table 690.7(A), crystalline and multicrystalline silicon, by band lower bound in °C
-// (pv-field-testing §4.1, confirmed across public transcriptions of NEC 2017 and 2023).
+// (pv-field-testing §4.1, confirmed across several independent public copies of NEC 2017 and 2023).
 const BANDS: readonly (readonly [lowerBoundC: number, factor: number])[] = [
   [20, 1.02],
   [15, 1.04],
