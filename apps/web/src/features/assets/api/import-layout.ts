@@ -1,11 +1,12 @@
 import { importPreviewSchema, type ImportPreview } from '@stringfield/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { ApiError, apiUrl, clearCsrfToken, genericMessage, getCsrfToken, parseApiError } from '@/lib/api-client';
+import { ApiError, apiUrl, parseApiError } from '@/lib/api-client';
+import { uploadForm, type UploadProgress } from '@/lib/upload';
 import { assetKeys } from './keys';
 
 export type ImportMode = 'dry-run' | 'commit';
-export type UploadProgress = { loadedBytes: number; totalBytes: number | undefined };
+export type { UploadProgress };
 
 /** A refused import that still says why, row by row: the API's 400 carries the checked `preview`. */
 export class ImportRejectedError extends ApiError {
@@ -17,35 +18,6 @@ export class ImportRejectedError extends ApiError {
 }
 
 const rejectedBodySchema = z.object({ preview: importPreviewSchema });
-
-type Sent = { status: number; text: string };
-
-/* fetch() cannot report upload progress; a 10 MB CSV on a site's mobile link can take a while. */
-function post(url: string, file: File, token: string, onProgress?: (p: UploadProgress) => void, signal?: AbortSignal): Promise<Sent> {
-  return new Promise((resolve, reject) => {
-    const xhr = new XMLHttpRequest();
-    xhr.open('POST', url);
-    xhr.withCredentials = true;
-    xhr.setRequestHeader('Accept', 'application/json');
-    xhr.setRequestHeader('x-csrf-token', token);
-    xhr.upload.onprogress = (event) => onProgress?.({ loadedBytes: event.loaded, totalBytes: event.lengthComputable ? event.total : undefined });
-    xhr.onload = () => resolve({ status: xhr.status, text: xhr.responseText });
-    xhr.onerror = () => reject(new ApiError({ status: 0, code: 'NETWORK', message: genericMessage(0) }));
-    xhr.onabort = () => reject(new DOMException('The upload was cancelled', 'AbortError'));
-    signal?.addEventListener('abort', () => xhr.abort(), { once: true });
-    const form = new FormData();
-    form.append('file', file, file.name);
-    xhr.send(form);
-  });
-}
-
-function parseJson(text: string): unknown {
-  try {
-    return JSON.parse(text);
-  } catch {
-    return undefined;
-  }
-}
 
 /**
  * Uploads a layout CSV: `dry-run` checks every row and changes nothing; `commit` imports all rows in
@@ -65,13 +37,16 @@ export async function importLayout({
   signal?: AbortSignal;
 }): Promise<ImportPreview> {
   const url = apiUrl(`/api/sites/${siteId}/import`, { mode });
-  let sent = await post(url, file, await getCsrfToken(), onProgress, signal);
-  if (sent.status === 403 && parseApiError(sent.status, sent.text).code === 'CSRF_FAILED') {
-    clearCsrfToken();
-    sent = await post(url, file, await getCsrfToken(), onProgress, signal);
-  }
-
-  const json = parseJson(sent.text);
+  const sent = await uploadForm(
+    url,
+    () => {
+      const form = new FormData();
+      form.append('file', file, file.name);
+      return form;
+    },
+    { onProgress, signal },
+  );
+  const json = sent.json;
   if (sent.status >= 200 && sent.status < 300) {
     const parsed = importPreviewSchema.safeParse(json);
     if (parsed.success) return parsed.data;

@@ -1,42 +1,12 @@
 import { type Photo, type PhotoMeta } from '@stringfield/shared';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
-import { ApiError, apiUrl, clearCsrfToken, genericMessage, getCsrfToken, parseApiError } from '@/lib/api-client';
+import { ApiError, apiUrl, parseApiError } from '@/lib/api-client';
+import { uploadForm, type UploadProgress } from '@/lib/upload';
 import { photosResponseSchema } from './get-photos';
 import { evidenceKeys } from './keys';
 
-export type UploadProgress = { loadedBytes: number; totalBytes: number | undefined };
-
-type Sent = { status: number; text: string };
-
-/* fetch() cannot report upload progress; a 6 MB photo over a site's mobile link takes a while. */
-function post(url: string, file: File, meta: PhotoMeta, token: string, onProgress?: (p: UploadProgress) => void, signal?: AbortSignal): Promise<Sent> {
-  return new Promise((resolve, reject) => {
-    const xhr = new XMLHttpRequest();
-    xhr.open('POST', url);
-    xhr.withCredentials = true;
-    xhr.setRequestHeader('Accept', 'application/json');
-    xhr.setRequestHeader('x-csrf-token', token);
-    xhr.upload.onprogress = (event) => onProgress?.({ loadedBytes: event.loaded, totalBytes: event.lengthComputable ? event.total : undefined });
-    xhr.onload = () => resolve({ status: xhr.status, text: xhr.responseText });
-    xhr.onerror = () => reject(new ApiError({ status: 0, code: 'NETWORK', message: genericMessage(0) }));
-    xhr.onabort = () => reject(new DOMException('The upload was cancelled', 'AbortError'));
-    signal?.addEventListener('abort', () => xhr.abort(), { once: true });
-    const form = new FormData();
-    // The API pairs `meta[i]` with the i-th `files` part; one file per request keeps each retry alone.
-    form.append('meta', JSON.stringify([meta]));
-    form.append('files', file, file.name);
-    xhr.send(form);
-  });
-}
-
-function parseJson(text: string): unknown {
-  try {
-    return JSON.parse(text);
-  } catch {
-    return undefined;
-  }
-}
+export type { UploadProgress };
 
 /**
  * Uploads one photo with its tag, string, module position and caption. Refusals (HEIC, too large,
@@ -56,13 +26,19 @@ export async function uploadPhoto({
   signal?: AbortSignal;
 }): Promise<Photo> {
   const url = apiUrl(`/api/work-orders/${workOrderId}/photos`);
-  let sent = await post(url, file, meta, await getCsrfToken(), onProgress, signal);
-  if (sent.status === 403 && parseApiError(sent.status, sent.text).code === 'CSRF_FAILED') {
-    clearCsrfToken();
-    sent = await post(url, file, meta, await getCsrfToken(), onProgress, signal);
-  }
+  const sent = await uploadForm(
+    url,
+    () => {
+      const form = new FormData();
+      // The API pairs `meta[i]` with the i-th `files` part; one file per request keeps each retry alone.
+      form.append('meta', JSON.stringify([meta]));
+      form.append('files', file, file.name);
+      return form;
+    },
+    { onProgress, signal },
+  );
   if (sent.status >= 200 && sent.status < 300) {
-    const parsed = photosResponseSchema.safeParse(parseJson(sent.text));
+    const parsed = photosResponseSchema.safeParse(sent.json);
     const photo = parsed.success ? parsed.data.items[0] : undefined;
     if (photo) return photo;
     throw new ApiError({
