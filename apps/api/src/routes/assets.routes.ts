@@ -86,46 +86,52 @@ export function stringsRouter() {
   return r;
 }
 
-export function moduleModelsRouter() {
+/** The routes of one datasheet library (module or inverter models): list, add, replace, archive, delete. */
+function libraryRouter<I>(input: { parse(body: unknown): I }, service: {
+  list: (q: Parameters<typeof lib.listModuleModels>[0]) => Promise<unknown>;
+  create: (i: I) => Promise<unknown>;
+  update: (id: number, i: I) => Promise<unknown>;
+  setArchived: (id: number, isArchived: boolean) => Promise<unknown>;
+  remove: (id: number) => Promise<void>;
+}) {
   const r = Router();
   r.get('/', read, async (req, res) => {
-    res.json(await lib.listModuleModels(listQuerySchema.and(pageQuerySchema).parse(req.query)));
+    res.json(await service.list(listQuerySchema.and(pageQuerySchema).parse(req.query)));
   });
   r.post('/', write, async (req, res) => {
-    res.status(201).json(await lib.createModuleModel(moduleModelInputSchema.parse(req.body)));
+    res.status(201).json(await service.create(input.parse(req.body)));
   });
   r.put('/:id', write, async (req, res) => {
-    res.json(await lib.updateModuleModel(idParams.parse(req.params).id, moduleModelInputSchema.parse(req.body)));
+    res.json(await service.update(idParams.parse(req.params).id, input.parse(req.body)));
   });
   r.patch('/:id', write, async (req, res) => {
-    res.json(await lib.setModuleModelArchived(idParams.parse(req.params).id, archivedOnly.parse(req.body).isArchived));
+    res.json(await service.setArchived(idParams.parse(req.params).id, archivedOnly.parse(req.body).isArchived));
   });
   r.delete('/:id', write, async (req, res) => {
-    await lib.deleteModuleModel(idParams.parse(req.params).id);
+    await service.remove(idParams.parse(req.params).id);
     res.status(204).end();
   });
   return r;
 }
 
+export function moduleModelsRouter() {
+  return libraryRouter(moduleModelInputSchema, {
+    list: lib.listModuleModels,
+    create: lib.createModuleModel,
+    update: lib.updateModuleModel,
+    setArchived: lib.setModuleModelArchived,
+    remove: lib.deleteModuleModel,
+  });
+}
+
 export function inverterModelsRouter() {
-  const r = Router();
-  r.get('/', read, async (req, res) => {
-    res.json(await lib.listInverterModels(listQuerySchema.and(pageQuerySchema).parse(req.query)));
+  return libraryRouter(inverterModelInputSchema, {
+    list: lib.listInverterModels,
+    create: lib.createInverterModel,
+    update: lib.updateInverterModel,
+    setArchived: lib.setInverterModelArchived,
+    remove: lib.deleteInverterModel,
   });
-  r.post('/', write, async (req, res) => {
-    res.status(201).json(await lib.createInverterModel(inverterModelInputSchema.parse(req.body)));
-  });
-  r.put('/:id', write, async (req, res) => {
-    res.json(await lib.updateInverterModel(idParams.parse(req.params).id, inverterModelInputSchema.parse(req.body)));
-  });
-  r.patch('/:id', write, async (req, res) => {
-    res.json(await lib.setInverterModelArchived(idParams.parse(req.params).id, archivedOnly.parse(req.body).isArchived));
-  });
-  r.delete('/:id', write, async (req, res) => {
-    await lib.deleteInverterModel(idParams.parse(req.params).id);
-    res.status(204).end();
-  });
-  return r;
 }
 
 const inverterUpdate = z
