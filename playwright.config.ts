@@ -5,7 +5,7 @@ const port = Number(process.env.E2E_PORT ?? 8091);
 /** Browser tests run in Debian's chromium (never a downloaded browser) against a server on loopback. */
 export default defineConfig({
   testDir: 'tests/e2e',
-  outputDir: '.data/test-results',
+  outputDir: process.env.TEST_SLOT ? `.data/test-results-${process.env.TEST_SLOT}` : '.data/test-results',
   fullyParallel: false,
   workers: 1,
   retries: 0,
@@ -17,7 +17,13 @@ export default defineConfig({
     screenshot: 'only-on-failure',
     launchOptions: {
       executablePath: '/usr/bin/chromium',
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
     },
   },
   projects: [{ name: 'chromium', use: { ...devices['Desktop Chrome'] } }],

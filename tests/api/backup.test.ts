@@ -10,7 +10,7 @@ import { resetDatabase } from './helpers.ts';
 import { apiTestEnv } from './test-env.ts';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
-const restoredDb = 'stringfield_restore_check';
+const restoredDb = `${apiTestEnv.DB_NAME}_restore_check`;
 
 async function fingerprint(db: string) {
   const tables = await sequelize.query<{ t: string }>(
@@ -19,8 +19,12 @@ async function fingerprint(db: string) {
   );
   const out: Record<string, { rows: number; checksum: number }> = {};
   for (const { t } of tables) {
-    const [count] = await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${db}\`.\`${t}\``, { type: QueryTypes.SELECT });
-    const [sum] = await sequelize.query<{ Checksum: number }>(`CHECKSUM TABLE \`${db}\`.\`${t}\``, { type: QueryTypes.SELECT });
+    const [count] = await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${db}\`.\`${t}\``, {
+      type: QueryTypes.SELECT,
+    });
+    const [sum] = await sequelize.query<{ Checksum: number }>(`CHECKSUM TABLE \`${db}\`.\`${t}\``, {
+      type: QueryTypes.SELECT,
+    });
     out[t] = { rows: Number(count!.n), checksum: Number(sum!.Checksum) };
   }
   return out;
@@ -34,9 +38,17 @@ describe('backup and restore', () => {
   it('round-trips the database: same tables, row counts and checksums', async () => {
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-backup-'));
     const env = { ...process.env, DB_NAME: apiTestEnv.DB_NAME, UPLOADS_DIR: apiTestEnv.UPLOADS_DIR };
-    execFileSync(process.execPath, ['scripts/backup.mjs', 'backup', '--to', dir], { cwd: root, env, stdio: 'ignore' });
+    execFileSync(process.execPath, ['scripts/backup.mjs', 'backup', '--to', dir], {
+      cwd: root,
+      env,
+      stdio: 'ignore',
+    });
     expect(fs.statSync(path.join(dir, 'database.sql')).size).toBeGreaterThan(10_000);
-    execFileSync(process.execPath, ['scripts/backup.mjs', 'restore', '--from', dir, '--into', restoredDb], { cwd: root, env, stdio: 'ignore' });
+    execFileSync(process.execPath, ['scripts/backup.mjs', 'restore', '--from', dir, '--into', restoredDb], {
+      cwd: root,
+      env,
+      stdio: 'ignore',
+    });
     const [original, restored] = [await fingerprint(apiTestEnv.DB_NAME), await fingerprint(restoredDb)];
     expect(Object.keys(restored)).toEqual(Object.keys(original));
     expect(restored).toEqual(original);

@@ -7,16 +7,19 @@ import { fileURLToPath } from 'node:url';
 import { Sequelize } from 'sequelize';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
+// TEST_SLOT=N: a second copy of the browser suite gets its own database and mail folder (set E2E_PORT and
+// E2E_MAIL_PORT too); see tests/api/test-env.ts.
+const slot = Number(process.env.TEST_SLOT ?? 0);
 const port = process.env.E2E_PORT ?? '8091';
 const mailPort = Number(process.env.E2E_MAIL_PORT ?? 1027);
 export const e2eEnv = {
   NODE_ENV: 'test',
   LOG_LEVEL: 'warn',
-  DB_NAME: 'stringfield_e2e',
+  DB_NAME: slot ? `stringfield_e2e_${slot}` : 'stringfield_e2e',
   PORT: port,
   APP_URL: `http://127.0.0.1:${port}`,
   SMTP_URL: `smtp://127.0.0.1:${mailPort}`,
-  MAIL_CATCHER_DIR: path.join(root, '.data/mail-e2e'),
+  MAIL_CATCHER_DIR: path.join(root, slot ? `.data/mail-e2e-${slot}` : '.data/mail-e2e'),
   SESSION_SECRET: 'stringfield-e2e-tests-session-secret-0123456789',
 };
 Object.assign(process.env, e2eEnv);
