@@ -67,7 +67,13 @@ export async function healthMap(user: SessionUser, siteId: number): Promise<Heal
   return {
     siteId,
     cells,
-    counts: { pass: count('pass'), attention: count('attention'), fail: count('fail'), unchecked: count(null), withOpenTickets: cells.filter((c) => c.openTickets > 0).length },
+    counts: {
+      pass: count('pass'),
+      attention: count('attention'),
+      fail: count('fail'),
+      unchecked: count(null),
+      withOpenTickets: cells.filter((c) => c.openTickets > 0).length,
+    },
   };
 }
 
@@ -105,14 +111,23 @@ export async function energyAtRisk(user: SessionUser, siteId?: number): Promise<
       WHERE w.status IN (:open) ${siteId ? 'AND w.site_id = :siteId' : ''} ${visible ? 'AND w.site_id IN (:visible)' : ''}`,
     { replacements: { open, siteId, visible: visible?.length ? visible : [-1] }, type: QueryTypes.SELECT },
   );
-  const modules = new Map((await ModuleModel.findAll({ where: { id: [...new Set(rows.map((r) => r.module_model_id))] } })).map((m) => [m.id, m]));
+  const modules = new Map(
+    (await ModuleModel.findAll({ where: { id: [...new Set(rows.map((r) => r.module_model_id))] } })).map(
+      (m) => [m.id, m],
+    ),
+  );
   const pmpMemo = new Map<string, number>();
   const byTicket = new Map<number, EnergyAtRiskItem>();
   for (const r of rows) {
     const key = `${r.module_model_id}|${r.modules_in_series}|${r.design_irradiance_wm2}`;
     let pmp = pmpMemo.get(key);
     if (pmp === undefined) {
-      pmp = expectedString({ module: modules.get(r.module_model_id)!.toSpec(), modulesInSeries: r.modules_in_series, irradianceWm2: r.design_irradiance_wm2, moduleTempC: 25 }).pmpW;
+      pmp = expectedString({
+        module: modules.get(r.module_model_id)!.toSpec(),
+        modulesInSeries: r.modules_in_series,
+        irradianceWm2: r.design_irradiance_wm2,
+        moduleTempC: 25,
+      }).pmpW;
       pmpMemo.set(key, pmp);
     }
     let ratio = 1;
@@ -123,12 +138,22 @@ export async function energyAtRisk(user: SessionUser, siteId?: number): Promise<
       ratio = 1 - Math.max(0, Math.min(1, Math.max(0, v) * Math.max(0, i)));
       basis = 'latest check: Pmp scaled by the measured Voc and Isc ratios';
     }
-    const item = byTicket.get(r.work_order_id) ?? { workOrderId: r.work_order_id, number: r.number, siteCode: r.site_code, missingW: 0, dailyKWh: 0, peakSunHours: r.peak_sun_hours, basis };
+    const item = byTicket.get(r.work_order_id) ?? {
+      workOrderId: r.work_order_id,
+      number: r.number,
+      siteCode: r.site_code,
+      missingW: 0,
+      dailyKWh: 0,
+      peakSunHours: r.peak_sun_hours,
+      basis,
+    };
     item.missingW += pmp * ratio;
     item.dailyKWh = (item.missingW / 1000) * r.peak_sun_hours;
     byTicket.set(r.work_order_id, item);
   }
-  return [...byTicket.values()].map((x) => ({ ...x, missingW: Math.round(x.missingW), dailyKWh: Math.round(x.dailyKWh * 10) / 10 })).sort((a, b) => b.missingW - a.missingW);
+  return [...byTicket.values()]
+    .map((x) => ({ ...x, missingW: Math.round(x.missingW), dailyKWh: Math.round(x.dailyKWh * 10) / 10 }))
+    .sort((a, b) => b.missingW - a.missingW);
 }
 
 /** Work-order metrics as SQL aggregates over tickets reported in the period (open counts: now). */
@@ -145,23 +170,47 @@ export async function metrics(user: SessionUser, q: MetricsQuery): Promise<Metri
     ...(user.role === 'owner' ? ["w.status = 'signed_off'"] : []),
   ];
   const scope = conditions.length ? `AND ${conditions.join(' AND ')}` : '';
-  const r = { siteId: q.siteId, visible: visible?.length ? visible : [-1], faultCategory: q.faultCategory, from, to, open, now: new Date() };
-  const select = <T extends object>(sql: string) => sequelize.query<T>(sql, { replacements: r, type: QueryTypes.SELECT });
+  const r = {
+    siteId: q.siteId,
+    visible: visible?.length ? visible : [-1],
+    faultCategory: q.faultCategory,
+    from,
+    to,
+    open,
+    now: new Date(),
+  };
+  const select = <T extends object>(sql: string) =>
+    sequelize.query<T>(sql, { replacements: r, type: QueryTypes.SELECT });
 
   const [openRows, overdue, meanRows, ftf, repeats, top] = await Promise.all([
     select<{ status: WorkOrderStatus; n: number; age_h: number }>(
       `SELECT w.status, COUNT(*) AS n, AVG(TIMESTAMPDIFF(MINUTE, w.reported_at, :now)) / 60 AS age_h
          FROM work_orders w WHERE w.status IN (:open) ${scope} GROUP BY w.status`,
     ),
-    select<{ n: number }>(`SELECT COUNT(*) AS n FROM work_orders w WHERE w.status IN (:open) AND w.due_at < :now ${scope}`),
-    select<{ site_id: number; code: string; fault_category: FaultCategory; n: number; dispatch_h: number | null; repair_h: number | null; signoff_h: number | null }>(
-      `SELECT w.site_id, st.code, w.fault_category, COUNT(*) AS n,
-              AVG(TIMESTAMPDIFF(MINUTE, w.reported_at, w.dispatched_at)) / 60 AS dispatch_h,
-              AVG(TIMESTAMPDIFF(MINUTE, w.reported_at, w.submitted_at)) / 60 AS repair_h,
-              AVG(TIMESTAMPDIFF(MINUTE, w.reported_at, w.signed_off_at)) / 60 AS signoff_h
-         FROM work_orders w JOIN sites st ON st.id = w.site_id
-        WHERE w.reported_at >= :from AND w.reported_at < :to ${scope}
-        GROUP BY w.site_id, st.code, w.fault_category ORDER BY st.code, w.fault_category`,
+    select<{ n: number }>(
+      `SELECT COUNT(*) AS n FROM work_orders w WHERE w.status IN (:open) AND w.due_at < :now ${scope}`,
+    ),
+    select<{
+      site_id: number;
+      code: string;
+      fault_category: FaultCategory;
+      n: number;
+      dispatch_h: number | null;
+      repair_h: number | null;
+      signoff_h: number | null;
+    }>(
+      // Aggregated before the join: joined first, MariaDB walks every ticket of each site by its
+      // site index (360 ms at 100,000 tickets) instead of the period's range of the covering index (35 ms).
+      `SELECT a.*, st.code FROM (
+         SELECT w.site_id, w.fault_category, COUNT(*) AS n,
+                AVG(TIMESTAMPDIFF(MINUTE, w.reported_at, w.dispatched_at)) / 60 AS dispatch_h,
+                AVG(TIMESTAMPDIFF(MINUTE, w.reported_at, w.submitted_at)) / 60 AS repair_h,
+                AVG(TIMESTAMPDIFF(MINUTE, w.reported_at, w.signed_off_at)) / 60 AS signoff_h
+           FROM work_orders w
+          WHERE w.reported_at >= :from AND w.reported_at < :to ${scope}
+          GROUP BY w.site_id, w.fault_category) a
+         JOIN sites st ON st.id = a.site_id
+        ORDER BY st.code, a.fault_category`,
     ),
     select<{ signed: number; clean: number }>(
       `SELECT COUNT(*) AS signed, COALESCE(SUM(w.return_count = 0), 0) AS clean
@@ -189,7 +238,11 @@ export async function metrics(user: SessionUser, q: MetricsQuery): Promise<Metri
   const clean = Number(ftf[0]?.clean ?? 0);
   return {
     period: { from: q.from, to: q.to },
-    openByStatus: openRows.map((o) => ({ status: o.status, count: Number(o.n), averageAgeHours: num(o.age_h) ?? 0 })),
+    openByStatus: openRows.map((o) => ({
+      status: o.status,
+      count: Number(o.n),
+      averageAgeHours: num(o.age_h) ?? 0,
+    })),
     overdueCount: Number(overdue[0]?.n ?? 0),
     meanTimes: meanRows.map((m) => ({
       siteId: m.site_id,
@@ -200,8 +253,17 @@ export async function metrics(user: SessionUser, q: MetricsQuery): Promise<Metri
       toRepairHours: num(m.repair_h),
       toSignOffHours: num(m.signoff_h),
     })),
-    firstTimeFix: { signedOff: signed, withoutReturn: clean, rate: signed ? Math.round((clean / signed) * 1000) / 1000 : null },
-    repeatFaults: repeats.map((x) => ({ stringId: x.string_id, label: x.label, siteCode: x.code, repeats: Number(x.repeats) })),
+    firstTimeFix: {
+      signedOff: signed,
+      withoutReturn: clean,
+      rate: signed ? Math.round((clean / signed) * 1000) / 1000 : null,
+    },
+    repeatFaults: repeats.map((x) => ({
+      stringId: x.string_id,
+      label: x.label,
+      siteCode: x.code,
+      repeats: Number(x.repeats),
+    })),
     topFaultCategories: top.map((t) => ({ faultCategory: t.fault_category, count: Number(t.n) })),
   };
 }
