@@ -86,3 +86,8 @@ export async function resetPassword({ token, password }: ResetInput): Promise<vo
     await Session.destroy({ where: { userId: user.id }, transaction });
   });
 }
+
+/** Ends every session of a user (all devices); returns how many there were. */
+export async function signOutEverywhere(userId: number): Promise<number> {
+  return Session.destroy({ where: { userId } });
+}
