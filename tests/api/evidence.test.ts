@@ -70,7 +70,8 @@ describe('photo uploads', () => {
     const p = res.body.items[0];
     // Stored 600 × 400 with orientation 6 → upright 400 × 600.
     expect([p.width, p.height]).toEqual([400, 600]);
-    expect(p.capturedAt).toMatch(/^2026-11-30T/);
+    // No EXIF offset: 10:15 on the camera is wall-clock time at Fenwick Moor (Europe/Berlin, CET +01:00).
+    expect(p.capturedAt).toBe('2026-11-30T09:15:00.000Z');
     expect(p.gps.lat).toBeCloseTo(52.5, 3);
     expect(p.gps.lon).toBeCloseTo(13.4, 3);
     const screen = await tech.get(p.urls.screen).buffer(true).parse((r, cb) => {
@@ -132,6 +133,34 @@ describe('photo uploads', () => {
     await owner.get(`/api/work-orders/${ticket.id}/photos`).expect(404);
     const list = await tech.get(`/api/work-orders/${ticket.id}/photos`).expect(200);
     await owner.get(list.body.items[0].urls.thumb).expect(404);
+  });
+});
+
+describe('capture time', () => {
+  /** A JPEG whose EXIF says 10:15:00 on 30 Nov 2026 (or another wall-clock time), with the offset tags given. */
+  const shotAt = (exif: Record<string, string>) =>
+    sharp({ create: { width: 64, height: 48, channels: 3, background: '#557799' } })
+      .jpeg()
+      .withExifMerge({ IFD2: { DateTimeOriginal: '2026:11:30 10:15:00', ...exif } })
+      .toBuffer();
+  const capturedAt = async (buffer: Buffer) => (await upload(tech, [{ buffer, name: 'shot.jpg' }], [{ tag: 'other' }]).expect(201)).body.items[0].capturedAt;
+
+  it('uses the offset the camera wrote (OffsetTimeOriginal), not the site zone', async () => {
+    // 10:15 at +09:30 is 00:45 UTC; the site's Berlin time would have given 09:15 UTC.
+    expect(await capturedAt(await shotAt({ OffsetTimeOriginal: '+09:30', OffsetTime: '+01:00' }))).toBe('2026-11-30T00:45:00.000Z');
+  });
+
+  it('falls back to OffsetTime when the camera wrote no OffsetTimeOriginal', async () => {
+    expect(await capturedAt(await shotAt({ OffsetTime: '-05:00' }))).toBe('2026-11-30T15:15:00.000Z');
+  });
+
+  it('reads a time without offset in the site zone, summer time included', async () => {
+    // 1 Jul 2026 10:15 in Europe/Berlin is CEST (+02:00).
+    expect(await capturedAt(await shotAt({ DateTimeOriginal: '2026:07:01 10:15:00' }))).toBe('2026-07-01T08:15:00.000Z');
+  });
+
+  it('stores no capture time when the EXIF date is blank', async () => {
+    expect(await capturedAt(await shotAt({ DateTimeOriginal: '    :  :     :  :  ' }))).toBeNull();
   });
 });
 

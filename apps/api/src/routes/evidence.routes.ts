@@ -48,6 +48,12 @@ export function photosRouter() {
   r.get('/:id/:size', requirePermission('workOrders:read'), async (req, res) => {
     const { id, size } = idParams.extend({ size: z.enum(['thumb', 'screen', 'original']) }).parse(req.params);
     const file = await readPhotoFile(req.user!, id, size);
+    if ('redirectUrl' in file) {
+      // The signed URL expires within a minute, so the redirect itself must not be cached.
+      res.setHeader('Cache-Control', 'private, no-store');
+      res.redirect(302, file.redirectUrl);
+      return;
+    }
     res.setHeader('Content-Type', file.contentType);
     res.setHeader('Cache-Control', 'private, max-age=86400');
     res.setHeader('Content-Disposition', 'inline');

@@ -1,0 +1,95 @@
+// Wall-clock times to instants with Intl only (no time-zone package is installed).
+
+const formatters = new Map<string, Intl.DateTimeFormat>();
+
+function formatter(timeZone: string): Intl.DateTimeFormat {
+  let f = formatters.get(timeZone);
+  if (!f) {
+    f = new Intl.DateTimeFormat('en-US', {
+      timeZone,
+      hourCycle: 'h23',
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+      second: '2-digit',
+    });
+    formatters.set(timeZone, f);
+  }
+  return f;
+}
+
+/** The zone's offset from UTC at instant `ms`, in milliseconds (east positive). */
+function offsetMsAt(ms: number, timeZone: string): number {
+  const parts = formatter(timeZone).formatToParts(ms);
+  const n = (type: Intl.DateTimeFormatPartTypes) => Number(parts.find((p) => p.type === type)?.value);
+  const wall = Date.UTC(n('year'), n('month') - 1, n('day'), n('hour'), n('minute'), n('second'));
+  return wall - Math.floor(ms / 1000) * 1000;
+}
+
+export type WallClock = {
+  year: number;
+  month: number;
+  day: number;
+  hour: number;
+  minute: number;
+  second: number;
+};
+
+/**
+ * The instant a wall-clock time names in an IANA zone. Like Temporal's 'compatible' choice: a time that
+ * occurs twice (clocks set back) is the earlier one; a time skipped by clocks going forward moves forward by the gap.
+ * Throws RangeError for an unknown zone.
+ */
+export function zonedWallClockToDate(w: WallClock, timeZone: string): Date {
+  const wallMs = Date.UTC(w.year, w.month - 1, w.day, w.hour, w.minute, w.second);
+  // Offsets half a day either side bracket any single transition.
+  const before = offsetMsAt(wallMs - 12 * 3_600_000, timeZone);
+  const after = offsetMsAt(wallMs + 12 * 3_600_000, timeZone);
+  const fits = [before, after].map((o) => wallMs - o).filter((t) => offsetMsAt(t, timeZone) === wallMs - t);
+  return new Date(fits.length ? Math.min(...fits) : wallMs - before);
+}
+
+const EXIF_DATE = /^(\d{4})[:-](\d{2})[:-](\d{2})[ T](\d{2}):(\d{2}):(\d{2})/;
+const EXIF_OFFSET = /^([+-])(\d{2}):(\d{2})$/;
+
+/**
+ * An EXIF date-time ("2026:11:30 10:15:00", no zone) as an instant: with its EXIF offset ("+01:00") when the
+ * camera wrote one, else read as wall-clock time in `timeZone`. Null when the value is blank or not a date.
+ */
+export function exifDateTimeToDate(raw: unknown, offset: unknown, timeZone: string): Date | null {
+  if (typeof raw !== 'string') return null;
+  const m = EXIF_DATE.exec(raw.trim());
+  if (!m) return null;
+  const [year, month, day, hour, minute, second] = m.slice(1).map(Number) as [
+    number,
+    number,
+    number,
+    number,
+    number,
+    number,
+  ];
+  const check = new Date(Date.UTC(year, month - 1, day, hour, minute, second));
+  if (
+    check.getUTCMonth() !== month - 1 ||
+    check.getUTCDate() !== day ||
+    hour > 23 ||
+    minute > 59 ||
+    second > 59
+  )
+    return null;
+  const o = typeof offset === 'string' ? EXIF_OFFSET.exec(offset.trim()) : null;
+  let date: Date;
+  if (o) {
+    const offsetMs = (o[1] === '-' ? -1 : 1) * (Number(o[2]) * 60 + Number(o[3])) * 60_000;
+    date = new Date(check.getTime() - offsetMs);
+  } else {
+    try {
+      date = zonedWallClockToDate({ year, month, day, hour, minute, second }, timeZone);
+    } catch {
+      date = check;
+    }
+  }
+  return Number.isNaN(date.getTime()) ? null : date;
+}
