@@ -17,13 +17,42 @@ import { env } from '../config/env.ts';
 import { AppError, notFound } from '../lib/app-error.ts';
 import { logger } from '../lib/logger.ts';
 import { storage } from '../lib/storage.ts';
-import { DiodeReplacement, Photo, PvString, ThermalFinding, User, WorkOrder, WorkOrderString, sequelize } from '../models/index.ts';
-import { visibleSiteIds } from './site-access.ts';
+import { exifDateTimeToDate } from '../lib/zoned-time.ts';
+import { DiodeReplacement, Photo, PvString, Site, ThermalFinding, User, WorkOrder, WorkOrderString, sequelize } from '../models/index.ts';
+import { findVisibleSite, visibleSiteIds } from './site-access.ts';
 
 // A 12-megapixel phone photo is 4000 × 3000; 50 MP refuses decompression bombs long before memory runs out.
 const MAX_INPUT_PIXELS = 50_000_000;
 const SIZES = { screen: 1600, thumb: 320 } as const;
 const ACCEPTED = new Set(['jpeg', 'png', 'webp']);
+// Capture time and its zone (EXIF 2.31 offsets like "+02:00"), and GPS.
+const EXIF_TAGS = ['DateTimeOriginal', 'OffsetTimeOriginal', 'CreateDate', 'OffsetTimeDigitized', 'OffsetTime', 'GPSLatitude', 'GPSLongitude', 'GPSLatitudeRef', 'GPSLongitudeRef'] as const;
+// Signed file URLs live long enough for the browser to follow the redirect, not to be passed around.
+const SIGNED_URL_TTL_S = 60;
+
+// Every upload is a new image, so libvips' operation cache only holds memory; and at most two photos are
+// decoded at once in this process, so ten uploads at once queue rather than multiply peak memory.
+sharp.cache(false);
+const photoJobs = limiter(2);
+
+function limiter(max: number) {
+  let active = 0;
+  const waiting: Array<() => void> = [];
+  return {
+    async run<T>(job: () => Promise<T>): Promise<T> {
+      // A finished job hands its slot straight to the next waiter, so `active` never exceeds `max`.
+      if (active >= max) await new Promise<void>((resolve) => waiting.push(resolve));
+      else active += 1;
+      try {
+        return await job();
+      } finally {
+        const next = waiting.shift();
+        if (next) next();
+        else active -= 1;
+      }
+    },
+  };
+}
 
 const patternMap: Record<string, ThermalPattern> = {
   single_cell: 'hot-cell',
@@ -50,7 +79,11 @@ type Processed = {
 };
 
 /** Check, re-encode and size one uploaded image in memory; throws a 400 naming the file when it is not usable. */
-export async function processImage(file: UploadFile, meta: PhotoMeta, index: number): Promise<Processed> {
+export async function processImage(file: UploadFile, meta: PhotoMeta, index: number, siteTimeZone = 'UTC'): Promise<Processed> {
+  return photoJobs.run(() => processImageNow(file, meta, index, siteTimeZone));
+}
+
+async function processImageNow(file: UploadFile, meta: PhotoMeta, index: number, siteTimeZone: string): Promise<Processed> {
   const name = file.originalname || `file ${index + 1}`;
   let info: Metadata;
   try {
@@ -70,20 +103,25 @@ export async function processImage(file: UploadFile, meta: PhotoMeta, index: num
   if ((info.width ?? 0) * (info.height ?? 0) > MAX_INPUT_PIXELS) {
     throw new AppError('VALIDATION_FAILED', `${name} has more than 50 megapixels; send a smaller image.`);
   }
-  let exif: { DateTimeOriginal?: Date; CreateDate?: Date; latitude?: number; longitude?: number } | undefined;
+  let exif: Partial<Record<(typeof EXIF_TAGS)[number], unknown>> & { latitude?: number; longitude?: number } | undefined;
   try {
-    exif = (await exifr.parse(file.buffer, { pick: ['DateTimeOriginal', 'CreateDate', 'GPSLatitude', 'GPSLongitude', 'GPSLatitudeRef', 'GPSLongitudeRef'], gps: true })) as typeof exif;
+    // reviveValues: false keeps dates as the camera's strings; exifr would read them in this process's zone.
+    exif = (await exifr.parse(file.buffer, { pick: [...EXIF_TAGS], gps: true, reviveValues: false })) as typeof exif;
   } catch {
     exif = undefined;
   }
   try {
-    // One decode shared by both sizes; rotate() applies the EXIF orientation, and sharp writes no
-    // metadata unless asked, so the served copies carry no EXIF. The original is kept as uploaded.
-    const upright = sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' }).rotate();
-    const encode = (px: number) => upright.clone().resize({ width: px, height: px, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 80 }).toBuffer();
-    const [screen, thumb] = await Promise.all([encode(SIZES.screen), encode(SIZES.thumb)]);
+    // The screen copy is decoded once from the upload (JPEG shrink-on-load) and the thumbnail made from the
+    // screen copy, one after the other: two decodes of the original side by side cost 60–90 MB more RSS
+    // and were no faster on the 2-core bench machine (tests/load/bench-photo.ts). rotate() applies the EXIF orientation, and sharp writes
+    // no metadata unless asked, so the served copies carry no EXIF. The original is kept as uploaded.
+    const fit = (px: number) => ({ width: px, height: px, fit: 'inside', withoutEnlargement: true }) as const;
+    const screen = await sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' }).rotate().resize(fit(SIZES.screen)).jpeg({ quality: 80 }).toBuffer();
+    const thumb = await sharp(screen).resize(fit(SIZES.thumb)).jpeg({ quality: 80 }).toBuffer();
     const isQuarterTurn = (info.orientation ?? 1) >= 5;
-    const captured = exif?.DateTimeOriginal ?? exif?.CreateDate ?? null;
+    const capturedAt =
+      exifDateTimeToDate(exif?.DateTimeOriginal, exif?.OffsetTimeOriginal ?? exif?.OffsetTime, siteTimeZone) ??
+      exifDateTimeToDate(exif?.CreateDate, exif?.OffsetTimeDigitized ?? exif?.OffsetTime, siteTimeZone);
     return {
       meta,
       original: file.buffer,
@@ -93,7 +131,7 @@ export async function processImage(file: UploadFile, meta: PhotoMeta, index: num
       width: isQuarterTurn ? info.height : info.width,
       height: isQuarterTurn ? info.width : info.height,
       sha256: createHash('sha256').update(file.buffer).digest('hex'),
-      capturedAt: captured instanceof Date && !Number.isNaN(captured.getTime()) ? captured : null,
+      capturedAt,
       gps: typeof exif?.latitude === 'number' && typeof exif.longitude === 'number' ? { lat: exif.latitude, lon: exif.longitude } : null,
     };
   } catch (err) {
@@ -193,8 +231,10 @@ export async function uploadPhotos(user: SessionUser, workOrderId: number, files
     const onTicket = await WorkOrderString.count({ where: { workOrderId: wo.id, stringId: stringIds } });
     if (onTicket !== stringIds.length) throw new AppError('VALIDATION_FAILED', `A photo names a string that is not on ${wo.number}.`, { stringId: 'Not on this ticket' });
   }
+  // A camera without EXIF offsets records the wall-clock time where it is: the site's.
+  const timeZone = (await Site.findByPk(wo.siteId, { attributes: ['id', 'timeZone'] }))?.timeZone ?? 'UTC';
   const processed: Processed[] = [];
-  for (const [i, file] of files.entries()) processed.push(await processImage(file, metaList[i]!, i));
+  for (const [i, file] of files.entries()) processed.push(await processImage(file, metaList[i]!, i, timeZone));
 
   const written: string[] = [];
   try {
@@ -238,7 +278,9 @@ export async function uploadPhotos(user: SessionUser, workOrderId: number, files
     });
     return photoDtos(rows);
   } catch (err) {
-    await Promise.all(written.map((k) => storage.delete(k).catch(() => undefined)));
+    await Promise.all(
+      written.map((k) => storage.delete(k).catch((e: unknown) => logger.error({ err: (e as Error).message, key: k }, 'upload clean-up left a file behind'))),
+    );
     throw err;
   }
 }
@@ -248,12 +290,19 @@ export async function listPhotos(user: SessionUser, workOrderId: number): Promis
   return photoDtos(await Photo.findAll({ where: { workOrderId }, order: [['id', 'ASC']] }));
 }
 
-export async function readPhotoFile(user: SessionUser, photoId: number, size: 'thumb' | 'screen' | 'original'): Promise<{ data: Buffer; contentType: string }> {
+/** One size of a photo the user may see: a short-lived signed URL where the storage signs, else the bytes. */
+export async function readPhotoFile(
+  user: SessionUser,
+  photoId: number,
+  size: 'thumb' | 'screen' | 'original',
+): Promise<{ redirectUrl: string } | { data: Buffer; contentType: string }> {
   const p = await Photo.findByPk(photoId);
   if (!p) throw notFound('That photo');
   await visibleTicket(user, p.workOrderId);
   const key = size === 'original' ? p.originalKey : size === 'screen' ? p.screenKey : p.thumbKey;
-  return { data: await storage.get(key), contentType: size === 'original' ? p.originalType : 'image/jpeg' };
+  const contentType = size === 'original' ? p.originalType : 'image/jpeg';
+  if (storage.signedUrl) return { redirectUrl: await storage.signedUrl(key, { expiresInS: SIGNED_URL_TTL_S, contentType }) };
+  return { data: await storage.get(key), contentType };
 }
 
 /** Record the thermal finding of a thermal image; the severity class comes from packages/pv. */
@@ -394,9 +443,17 @@ export async function updateDiodeReplacement(user: SessionUser, id: number, inpu
 
 export async function listDiodeReplacements(user: SessionUser, filter: { workOrderId?: number; stringId?: number }): Promise<DiodeReplacementDto[]> {
   if (filter.workOrderId) await visibleTicket(user, filter.workOrderId);
+  // A string of a site the caller cannot see is not found, as on the string's own page.
+  const string = filter.stringId ? await PvString.findByPk(filter.stringId, { attributes: ['id', 'siteId'] }) : null;
+  if (filter.stringId) {
+    if (!string) throw notFound('That string');
+    await findVisibleSite(user, string.siteId).catch(() => {
+      throw notFound('That string');
+    });
+  }
   const where: Record<string, unknown> = { ...filter };
   if (user.role === 'owner' && !filter.workOrderId) {
-    const ids = (await visibleSiteIds(user)) ?? [];
+    const ids = string ? [string.siteId] : ((await visibleSiteIds(user)) ?? []);
     const signed = await WorkOrder.findAll({ where: { siteId: ids, status: 'signed_off' }, attributes: ['id'] });
     where.workOrderId = signed.map((w) => w.id);
   }
