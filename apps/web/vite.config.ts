@@ -75,6 +75,9 @@ export default defineConfig({
     assetsInlineLimit: 0,
     modulePreload: { polyfill: false },
     sourcemap: false,
+    // dist/.vite/manifest.json maps each route module to its chunk and static imports, so the
+    // bundle-size check can add up what a first page needs.
+    manifest: true,
     rolldownOptions: {
       output: {
         // React and the router change rarely: a separate file stays cached across our releases.

@@ -1,6 +1,6 @@
 import { permissions, roles, type Role } from '@stringfield/shared';
 import { describe, expect, it } from 'vitest';
-import { isNavItemActive, navItems, navItemsFor, PHONE_TAB_LIMIT, PHONE_TAB_LIMIT_WIDE, phoneTabsFor, type NavItem } from './nav';
+import { isNavItemActive, isNavItemCurrent, navItems, navItemsFor, PHONE_TAB_LIMIT, PHONE_TAB_LIMIT_WIDE, phoneTabsFor, type NavItem } from './nav';
 
 const labels = (items: readonly NavItem[]) => items.map((item) => item.label);
 
@@ -121,5 +121,21 @@ describe('isNavItemActive', () => {
   it('matches the home page only exactly', () => {
     expect(isNavItemActive(item('/', true), '/')).toBe(true);
     expect(isNavItemActive(item('/', true), '/people')).toBe(false);
+  });
+});
+
+describe('isNavItemCurrent', () => {
+  const today = navItems.find((i) => i.label === 'Today')!;
+  const board = navItems.find((i) => i.label === 'Work orders')!;
+
+  it('puts a technician’s field page under Today, not under the board', () => {
+    expect(isNavItemCurrent(today, '/work-orders/12/field', 'technician')).toBe(true);
+    expect(isNavItemCurrent(board, '/work-orders/12/field', 'technician')).toBe(false);
+  });
+
+  it('keeps the field page under Work orders for the desk roles, and the ticket page for everyone', () => {
+    expect(isNavItemCurrent(board, '/work-orders/12/field', 'dispatcher')).toBe(true);
+    expect(isNavItemCurrent(today, '/work-orders/12/field', 'dispatcher')).toBe(false);
+    expect(isNavItemCurrent(board, '/work-orders/12', 'technician')).toBe(true);
   });
 });

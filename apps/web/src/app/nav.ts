@@ -84,3 +84,15 @@ export function isNavItemActive(item: NavItem, pathname: string): boolean {
   if (path === item.to) return true;
   return !item.isExact && path.startsWith(item.to === '/' ? '/' : `${item.to}/`);
 }
+
+/** `/work-orders/:id/field`: a technician's field page. */
+const fieldPagePath = /^\/work-orders\/[^/]+\/field\/?$/;
+
+/**
+ * Whether `item` is the current place for `role` at `pathname`: the path's own item, except that a
+ * technician's field page belongs to "Today", where their work list led them (not to the board).
+ */
+export function isNavItemCurrent(item: NavItem, pathname: string, role: Role | null | undefined): boolean {
+  if (role === 'technician' && fieldPagePath.test(pathname)) return item.to === paths.home();
+  return isNavItemActive(item, pathname);
+}

@@ -2,8 +2,7 @@ import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persi
 import { onlineManager, type QueryClient } from '@tanstack/react-query';
 import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
 import { del, get, set } from 'idb-keyval';
-import { useState, type ReactNode } from 'react';
-import { Toaster } from 'sonner';
+import { lazy, Suspense, useState, type ReactNode } from 'react';
 import type { SessionUser } from '@stringfield/shared';
 import { authKeys } from '@/features/auth/api/keys';
 import { createQueryClient } from '@/lib/query-client';
@@ -17,6 +16,9 @@ import {
   syncCacheOwner,
   type KeyValueStore,
 } from '@/lib/query-persistence';
+
+// Toasts only follow something a person did; the toaster (and Sonner) load after the first page.
+const AppToaster = lazy(async () => ({ default: (await import('@/components/ui/app-toaster')).AppToaster }));
 
 const idb: KeyValueStore = { get: (key) => get(key), set: (key, value) => set(key, value), del: (key) => del(key) };
 const cacheOwner = createCacheOwner(typeof window === 'undefined' ? null : window.localStorage);
@@ -65,23 +67,9 @@ export function AppProvider({ children }: { children: ReactNode }) {
       }}
     >
       {children}
-      <Toaster
-        position="top-center"
-        closeButton
-        duration={6000}
-        gap={10}
-        offset={16}
-        toastOptions={{
-          classNames: {
-            toast: '!rounded-card !border-2 !border-edge !bg-surface !text-ink !text-base !font-sans !shadow-raised !p-4',
-            title: '!font-semibold',
-            description: '!text-ink-muted',
-            success: '!border-pass',
-            error: '!border-fail',
-            closeButton: '!border-edge !bg-surface !text-ink',
-          },
-        }}
-      />
+      <Suspense fallback={null}>
+        <AppToaster />
+      </Suspense>
     </PersistQueryClientProvider>
   );
 }

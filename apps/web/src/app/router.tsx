@@ -1,16 +1,13 @@
 import { createBrowserRouter, Navigate } from 'react-router';
 import { routes } from '@/config/paths';
 import { FieldSyncLayout } from './routes/field-sync';
-import { ForgotPasswordRoute } from './routes/forgot-password';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 import { SessionLoading } from './routes/full-page-states';
 import { ProtectedLayout } from './routes/protected-layout';
 import { RequirePermission } from './routes/require-permission';
-import { ResetPasswordRoute } from './routes/reset-password';
 import { RootLayout } from './routes/root-layout';
 import { RouteError } from './routes/route-error';
-import { SignInRoute } from './routes/sign-in';
 
 /** The only place where features meet: each route composes what its page needs. */
 export const router = createBrowserRouter([
@@ -20,9 +17,11 @@ export const router = createBrowserRouter([
     // Shown while the first page's code loads (only lazy pages make it wait).
     hydrateFallbackElement: <SessionLoading />,
     children: [
-      { path: routes.signIn, element: <SignInRoute /> },
-      { path: routes.forgotPassword, element: <ForgotPasswordRoute /> },
-      { path: routes.resetPassword, element: <ResetPasswordRoute /> },
+      // The signed-out pages load on demand: their forms (react-hook-form) stay out of the script a
+      // signed-in technician's phone needs for its first page.
+      { path: routes.signIn, lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }) },
+      { path: routes.forgotPassword, lazy: async () => ({ Component: (await import('./routes/forgot-password')).ForgotPasswordRoute }) },
+      { path: routes.resetPassword, lazy: async () => ({ Component: (await import('./routes/reset-password')).ResetPasswordRoute }) },
       {
         element: <ProtectedLayout />,
         children: [

@@ -1,6 +1,6 @@
 import { roleLabels, type SessionUser } from '@stringfield/shared';
 import { useEffect, useRef, useState, type ReactNode } from 'react';
-import { NavLink, useLocation } from 'react-router';
+import { Link, useLocation } from 'react-router';
 import { Button } from '@/components/ui/button';
 import { Icon } from '@/components/ui/icon';
 import { Sheet } from '@/components/ui/sheet';
@@ -8,7 +8,7 @@ import { Wordmark } from '@/components/ui/wordmark';
 import { paths } from '@/config/paths';
 import { useSignOut } from '@/features/auth/api/sign-out';
 import { cn } from '@/lib/cn';
-import { isNavItemActive, navItemsFor, PHONE_TAB_LIMIT, PHONE_TAB_LIMIT_WIDE, phoneTabsFor, type NavItem } from '../nav';
+import { isNavItemCurrent, navItemsFor, PHONE_TAB_LIMIT, PHONE_TAB_LIMIT_WIDE, phoneTabsFor, type NavItem } from '../nav';
 
 /* The phone bar shows PHONE_TAB_LIMIT tabs and "More" below 480 px (four 90 px slots at 360 px) and
    one tab more from 480 px; both splits are rendered and CSS picks, so nothing jumps on load. */
@@ -49,8 +49,10 @@ export function AppShell({ user, notice, children }: { user: SessionUser; notice
     return () => desktop.removeEventListener('change', onChange);
   }, []);
 
-  const isInWideMore = wide.more.some((item) => isNavItemActive(item, pathname));
-  const currentInMore = narrow.more.find((item) => isNavItemActive(item, pathname));
+  // One rule for "you are here" in the rail, the tab bar and the More sheet (see isNavItemCurrent).
+  const isCurrent = (item: NavItem) => isNavItemCurrent(item, pathname, user.role);
+  const isInWideMore = wide.more.some(isCurrent);
+  const currentInMore = narrow.more.find(isCurrent);
   // Below 480 px the current page may sit under More while it is a tab above; mark "More" accordingly.
   const moreTone = isInWideMore ? 'active' : currentInMore ? 'narrow' : 'none';
 
@@ -77,9 +79,9 @@ export function AppShell({ user, notice, children }: { user: SessionUser; notice
 
       {/* Phone and tablet header */}
       <header className="on-brand sticky top-0 z-30 flex items-center justify-between gap-3 bg-brand px-3 py-1 text-on-brand shadow-card lg:hidden">
-        <NavLink to={paths.home()} className="inline-flex min-h-touch items-center rounded-control px-1" aria-label="Stringfield, home">
+        <Link to={paths.home()} className="inline-flex min-h-touch items-center rounded-control px-1" aria-label="Stringfield, home">
           <Wordmark isCompact />
-        </NavLink>
+        </Link>
         <div className="flex min-w-0 items-center gap-1">
           <span className="hidden min-w-0 truncate text-sm text-on-brand-muted sm:block">
             {user.name} · {roleLabels[user.role]}
@@ -91,27 +93,25 @@ export function AppShell({ user, notice, children }: { user: SessionUser; notice
       {/* Desktop side rail */}
       <aside className="on-brand fixed inset-y-0 left-0 z-30 hidden w-64 flex-col bg-brand text-on-brand lg:flex">
         <div className="px-6 pt-7 pb-8">
-          <NavLink to={paths.home()} className="inline-flex rounded-control" aria-label="Stringfield, home">
+          <Link to={paths.home()} className="inline-flex rounded-control" aria-label="Stringfield, home">
             <Wordmark />
-          </NavLink>
+          </Link>
         </div>
         <nav aria-label="Main" className="flex-1 px-3">
           <ul className="flex flex-col gap-1">
             {items.map((item) => (
               <li key={item.to}>
-                <NavLink
+                <Link
                   to={item.to}
-                  end={item.isExact}
-                  className={({ isActive }) =>
-                    cn(
-                      'flex min-h-touch items-center gap-3 rounded-control px-4 text-lg font-semibold transition-colors',
-                      isActive ? 'bg-paper text-brand' : 'text-on-brand hover:bg-brand-strong',
-                    )
-                  }
+                  aria-current={isCurrent(item) ? 'page' : undefined}
+                  className={cn(
+                    'flex min-h-touch items-center gap-3 rounded-control px-4 text-lg font-semibold transition-colors',
+                    isCurrent(item) ? 'bg-paper text-brand' : 'text-on-brand hover:bg-brand-strong',
+                  )}
                 >
                   <Icon name={item.icon} className="size-6" />
                   {item.label}
-                </NavLink>
+                </Link>
               </li>
             ))}
           </ul>
@@ -141,9 +141,9 @@ export function AppShell({ user, notice, children }: { user: SessionUser; notice
           <ul className="mx-auto flex max-w-xl">
             {wide.tabs.map((item) => (
               <li key={item.to} className={cn('flex-1', narrow.tabs.includes(item) ? 'flex' : onlyWide)}>
-                <NavLink to={item.to} end={item.isExact} className={({ isActive }) => tabClasses(isActive ? 'active' : 'none')}>
-                  {({ isActive }) => <TabContent item={item} tone={isActive ? 'active' : 'none'} />}
-                </NavLink>
+                <Link to={item.to} aria-current={isCurrent(item) ? 'page' : undefined} className={tabClasses(isCurrent(item) ? 'active' : 'none')}>
+                  <TabContent item={item} tone={isCurrent(item) ? 'active' : 'none'} />
+                </Link>
               </li>
             ))}
             {narrow.more.length > 0 ? (
@@ -172,33 +172,27 @@ export function AppShell({ user, notice, children }: { user: SessionUser; notice
             <ul className="flex flex-col gap-1">
               {narrow.more.map((item) => (
                 <li key={item.to} className={cn(!wide.more.includes(item) && onlyNarrow)}>
-                  <NavLink
+                  <Link
                     to={item.to}
-                    end={item.isExact}
+                    aria-current={isCurrent(item) ? 'page' : undefined}
                     onClick={() => setIsMoreOpen(false)}
-                    className={({ isActive }) =>
-                      cn(
-                        'relative flex min-h-14 items-center gap-3 rounded-control px-4 text-lg font-semibold transition-colors',
-                        isActive ? 'bg-brand-soft text-brand' : 'text-ink hover:bg-sunken active:bg-sunken',
-                      )
-                    }
-                  >
-                    {({ isActive }) => (
-                      <>
-                        <span aria-hidden="true" className={cn('absolute inset-y-2 left-0 w-1 rounded-r-full', isActive ? 'bg-copper-line' : 'bg-transparent')} />
-                        <Icon name={item.icon} className="size-6" />
-                        <span className="flex-1">{item.label}</span>
-                        {isActive ? (
-                          <span className="flex items-center gap-1 text-sm font-semibold text-brand">
-                            <Icon name="check" className="size-5" />
-                            Current
-                          </span>
-                        ) : (
-                          <Icon name="chevronRight" className="size-5 text-ink-muted" />
-                        )}
-                      </>
+                    className={cn(
+                      'relative flex min-h-14 items-center gap-3 rounded-control px-4 text-lg font-semibold transition-colors',
+                      isCurrent(item) ? 'bg-brand-soft text-brand' : 'text-ink hover:bg-sunken active:bg-sunken',
                     )}
-                  </NavLink>
+                  >
+                    <span aria-hidden="true" className={cn('absolute inset-y-2 left-0 w-1 rounded-r-full', isCurrent(item) ? 'bg-copper-line' : 'bg-transparent')} />
+                    <Icon name={item.icon} className="size-6" />
+                    <span className="flex-1">{item.label}</span>
+                    {isCurrent(item) ? (
+                      <span className="flex items-center gap-1 text-sm font-semibold text-brand">
+                        <Icon name="check" className="size-5" />
+                        Current
+                      </span>
+                    ) : (
+                      <Icon name="chevronRight" className="size-5 text-ink-muted" />
+                    )}
+                  </Link>
                 </li>
               ))}
             </ul>

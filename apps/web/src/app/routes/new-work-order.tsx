@@ -1,5 +1,5 @@
 import { useNavigate, useSearchParams } from 'react-router';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { CreateWorkOrderForm } from '@/features/work-orders/components/create-work-order-form';

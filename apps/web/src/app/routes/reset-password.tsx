@@ -1,6 +1,6 @@
 import { resetInputSchema } from '@stringfield/shared';
 import { Link, useNavigate, useSearchParams } from 'react-router';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { Alert } from '@/components/ui/alert';
 import { ButtonLink } from '@/components/ui/button';
 import { paths } from '@/config/paths';

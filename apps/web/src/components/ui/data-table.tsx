@@ -21,6 +21,8 @@ declare module '@tanstack/react-table' {
     className?: string;
     /** Leave this column's label off the phone card (e.g. the title line or an actions column). */
     isCardTitle?: boolean;
+    /** This column names the row (a `<th scope="row">`), so each cell is read with its row's name. */
+    isRowHeader?: boolean;
   }
 }
 
@@ -142,11 +144,17 @@ export function DataTable<T>({
           <tbody>
             {rows.map((row) => (
               <tr key={row.id} className="border-b border-line last:border-b-0 hover:bg-paper/70">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={cn('px-4 py-3 align-middle', cell.column.columnDef.meta?.className)}>
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
+                {row.getVisibleCells().map((cell) =>
+                  cell.column.columnDef.meta?.isRowHeader ? (
+                    <th key={cell.id} scope="row" className={cn('px-4 py-3 align-middle font-normal', cell.column.columnDef.meta.className)}>
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </th>
+                  ) : (
+                    <td key={cell.id} className={cn('px-4 py-3 align-middle', cell.column.columnDef.meta?.className)}>
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </td>
+                  ),
+                )}
               </tr>
             ))}
           </tbody>

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { get, type FieldValues, type Path, type UseFormReturn } from 'react-hook-form';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';

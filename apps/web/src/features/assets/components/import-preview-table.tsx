@@ -6,6 +6,11 @@ import { layoutColumnLabels } from '../lib/layout-csv';
 
 type Row = ImportPreview['rows'][number];
 
+/** The id of a file line's row, for links from the summary above the table. */
+export function importLineId(line: number): string {
+  return `import-line-${line}`;
+}
+
 /** Every checked CSV line: values by column, the cell with a problem marked and its message beside it. */
 export function ImportPreviewTable({ rows, caption }: { rows: Row[]; caption: string }) {
   const extraColumns = [...new Set(rows.flatMap((r) => [...r.errors, ...r.warnings].map((p) => p.column)))].filter(
@@ -40,7 +45,7 @@ export function ImportPreviewTable({ rows, caption }: { rows: Row[]; caption: st
             const rowErrors = row.errors.filter((e) => !columns.includes(e.column));
             return (
               <Fragment key={row.line}>
-                <tr className={cn('border-t border-line', hasErrors && 'bg-fail-soft/40')}>
+                <tr id={importLineId(row.line)} className={cn('scroll-mt-24 border-t border-line', hasErrors && 'bg-fail-soft/40')}>
                   <th scope="row" className={cn('readings sticky left-0 z-10 px-3 py-2 align-top font-semibold', hasErrors ? 'bg-fail-soft' : 'bg-surface')}>
                     {row.line}
                   </th>

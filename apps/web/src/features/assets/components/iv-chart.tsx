@@ -106,11 +106,13 @@ export function IvChart({
   );
 
   return (
+    // Hidden from assistive technology (the figures are given in words beside it), so the charts
+    // have Recharts' keyboard layer off: nothing in here may take focus.
     <div aria-hidden="true" className="flex flex-col gap-6">
       <div>
         <p className="mb-1 text-sm font-semibold text-ink-muted">Current against voltage (I-V)</p>
         <ResponsiveContainer width="100%" height={280}>
-          <LineChart margin={{ top: 16, right: 16, bottom: 16, left: 0 }}>
+          <LineChart accessibilityLayer={false} margin={{ top: 16, right: 16, bottom: 16, left: 0 }}>
             <CartesianGrid stroke={colours.grid} strokeDasharray="3 3" />
             {xAxis}
             <YAxis type="number" domain={[0, yMaxA]} tick={axisTick} width={48} label={{ value: 'A', position: 'insideTopLeft', offset: 0, fontSize: 14, fill: colours.ink }} />
@@ -135,7 +137,7 @@ export function IvChart({
       <div>
         <p className="mb-1 text-sm font-semibold text-ink-muted">Power against voltage (P-V)</p>
         <ResponsiveContainer width="100%" height={260}>
-          <LineChart margin={{ top: 16, right: 16, bottom: 16, left: 0 }}>
+          <LineChart accessibilityLayer={false} margin={{ top: 16, right: 16, bottom: 16, left: 0 }}>
             <CartesianGrid stroke={colours.grid} strokeDasharray="3 3" />
             {xAxis}
             <YAxis

@@ -1,13 +1,13 @@
 import type { ImportPreview, Site } from '@stringfield/shared';
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Icon } from '@/components/ui/icon';
 import { ImportRejectedError, useImportLayout, type UploadProgress } from '../api/import-layout';
 import { exampleLayoutCsv, formatBytes, layoutCsvHeader } from '../lib/layout-csv';
-import { ImportPreviewTable } from './import-preview-table';
+import { ImportPreviewTable, importLineId } from './import-preview-table';
 
 const MAX_BYTES = 10 * 1024 * 1024;
 
@@ -26,6 +26,7 @@ export function LayoutImport({
 }) {
   const upload = useImportLayout(site.id);
   const inputId = useId();
+  const summaryId = useId();
   const inputRef = useRef<HTMLInputElement>(null);
   const [file, setFile] = useState<File | null>(null);
   const [preview, setPreview] = useState<ImportPreview | null>(null);
@@ -160,26 +161,33 @@ export function LayoutImport({
             </Alert>
           ) : (
             <>
-              <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4" aria-live="polite">
+              {/* Each figure is named by its term, so it can be found (and read out) by what it counts, not where it sits. */}
+              <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4" aria-live="polite" aria-label={`Check of ${file?.name ?? 'the file'}`}>
                 {[
-                  ['Rows', preview.totalRows, 'text-ink'],
-                  ['Ready', preview.validRows, 'text-pass'],
-                  ['With errors', preview.errorRows, preview.errorRows ? 'text-fail' : 'text-ink'],
-                  ['With warnings', preview.warningRows, preview.warningRows ? 'text-attention' : 'text-ink'],
-                ].map(([label, value, colour]) => (
-                  <div key={label} className="rounded-card border border-line bg-surface px-4 py-3 shadow-card">
-                    <dt className="text-sm text-ink-muted">{label}</dt>
-                    <dd className={`readings text-2xl font-bold ${String(colour)}`}>{value}</dd>
+                  ['rows', 'Rows', preview.totalRows, 'text-ink'],
+                  ['ready', 'Ready', preview.validRows, 'text-pass'],
+                  ['errors', 'With errors', preview.errorRows, preview.errorRows ? 'text-fail' : 'text-ink'],
+                  ['warnings', 'With warnings', preview.warningRows, preview.warningRows ? 'text-attention' : 'text-ink'],
+                ].map(([key, label, value, colour]) => (
+                  <div key={String(key)} className="rounded-card border border-line bg-surface px-4 py-3 shadow-card">
+                    <dt id={`${summaryId}-${String(key)}`} className="text-sm text-ink-muted">
+                      {label}
+                    </dt>
+                    <dd aria-labelledby={`${summaryId}-${String(key)}`} className={`readings text-2xl font-bold ${String(colour)}`}>
+                      {value}
+                    </dd>
                   </div>
                 ))}
               </dl>
               {preview.errorRows > 0 ? (
                 <Alert tone="fail" title={`${preview.errorRows} ${preview.errorRows === 1 ? 'row has' : 'rows have'} errors: nothing can be imported yet`}>
                   Fix the marked cells in your spreadsheet, save the CSV and choose it again. Rows are imported all together or not at all.
+                  <LineLinks label="Go to" lines={preview.rows.filter((r) => r.errors.length > 0).map((r) => r.line)} />
                 </Alert>
               ) : preview.warningRows > 0 ? (
                 <Alert tone="attention" title="Warnings do not stop the import">
                   Read them before you import: they point at strings that will fail a sizing check.
+                  <LineLinks label="Go to" lines={preview.rows.filter((r) => r.warnings.length > 0).map((r) => r.line)} />
                 </Alert>
               ) : null}
               <div className="flex flex-wrap items-center justify-between gap-3">
@@ -197,5 +205,25 @@ export function LayoutImport({
         </section>
       ) : null}
     </div>
+  );
+}
+
+/** The file lines an alert is about, each a link to its row in the table below (first 20). */
+function LineLinks({ label, lines }: { label: string; lines: number[] }) {
+  if (lines.length === 0) return null;
+  const shown = lines.slice(0, 20);
+  return (
+    <span className="mt-1 block">
+      {label}:{' '}
+      {shown.map((line, index) => (
+        <span key={line}>
+          {index > 0 ? ', ' : null}
+          <a href={`#${importLineId(line)}`} className="inline-block py-1.5 font-semibold underline underline-offset-4">
+            line {line}
+          </a>
+        </span>
+      ))}
+      {lines.length > shown.length ? ` and ${lines.length - shown.length} more` : null}.
+    </span>
   );
 }

@@ -16,7 +16,7 @@ const columns = [
         <span className="mt-0.5 block text-sm text-ink-muted">{info.row.original.message}</span>
       </div>
     ),
-    meta: { isCardTitle: true, className: 'md:w-1/2' },
+    meta: { isCardTitle: true, isRowHeader: true, className: 'md:w-1/2' },
   }),
   column.accessor('value', {
     header: 'Value',

@@ -14,7 +14,7 @@ import {
 import { useMemo, useState } from 'react';
 import { Controller, useForm, useWatch, type FieldPath } from 'react-hook-form';
 import { Link } from 'react-router';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import type { z } from 'zod';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';

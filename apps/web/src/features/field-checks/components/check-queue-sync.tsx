@@ -2,7 +2,7 @@ import type { StringCheck } from '@stringfield/shared';
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import { Link, useLocation } from 'react-router';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { paths } from '@/config/paths';
 import { fieldCheckKeys } from '../api/keys';
 import { useCheckQueue } from '../hooks/use-check-queue';

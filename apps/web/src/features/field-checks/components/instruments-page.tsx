@@ -1,6 +1,6 @@
 import { instrumentKindLabels, type Instrument } from '@stringfield/shared';
 import { useState } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { Checkbox } from '@/components/ui/checkbox';

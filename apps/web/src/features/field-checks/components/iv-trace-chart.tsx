@@ -40,9 +40,11 @@ export default function IvTraceChart({
   const colours = useColours();
   const xMax = Math.ceil((Math.max(...[...measured, ...(healthy ?? []), ...stc].map((p) => p.voltageV), 10) * 1.03) / 50) * 50;
   return (
+    // Hidden from assistive technology (the figures are given in words beside it), so the charts
+    // have Recharts' keyboard layer off: nothing in here may take focus.
     <div aria-hidden="true" className="h-72 w-full sm:h-96">
       <ResponsiveContainer width="100%" height="100%">
-        <LineChart margin={{ top: 8, right: 12, bottom: 24, left: 0 }}>
+        <LineChart accessibilityLayer={false} margin={{ top: 8, right: 12, bottom: 24, left: 0 }}>
           <CartesianGrid stroke={colours.grid} strokeDasharray="3 3" />
           <XAxis
             type="number"

@@ -1,6 +1,6 @@
 import type { StringCheck } from '@stringfield/shared';
 import { lazy, Suspense, useId, useMemo, useRef, useState } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';

@@ -1,8 +1,11 @@
 import type { SessionUser } from '@stringfield/shared';
-import { format } from 'date-fns';
 import type { ReactNode } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FieldSafetyCard } from './field-safety-card';
+
+// "Wednesday 2 December". Intl rather than date-fns: this is a technician's first page, and every
+// kilobyte of script counts on a phone at the edge of coverage.
+const todayFormat = new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long' });
 
 /**
  * A field technician's home: today's work first, the safety card always beneath it. The list itself
@@ -14,7 +17,7 @@ export function MyWork({ user, work }: { user: SessionUser; work?: ReactNode }) 
     <div className="mx-auto flex max-w-2xl flex-col gap-6">
       <header>
         <p className="text-sm font-semibold tracking-wide text-brand uppercase">
-          {format(new Date(), 'EEEE d MMMM')}
+          {todayFormat.format(new Date())}
         </p>
         <h1 className="text-2xl font-bold sm:text-3xl">My work</h1>
         <p className="mt-1 text-ink-muted">

@@ -1,6 +1,6 @@
 import { transitionInputSchema, workOrderStatusLabels, type WorkOrderListItem } from '@stringfield/shared';
 import { useState } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';

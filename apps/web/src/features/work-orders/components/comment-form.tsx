@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { commentInputSchema } from '@stringfield/shared';
 import { useForm } from 'react-hook-form';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { Button } from '@/components/ui/button';
 import { FormField, Textarea } from '@/components/ui/form-field';
 import { Icon } from '@/components/ui/icon';

@@ -12,7 +12,7 @@ import {
   type WorkOrderDetail,
 } from '@stringfield/shared';
 import { useForm } from 'react-hook-form';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { z } from 'zod';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';

@@ -1,6 +1,6 @@
 import { mailCategories, mailCategoryLabels, mailPreferencesSchema } from '@stringfield/shared';
 import { useState } from 'react';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { Button } from '@/components/ui/button';
 import { Checkbox } from '@/components/ui/checkbox';
 import { ErrorState } from '@/components/ui/error-state';

@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { priorities, priorityLabels, slaPolicySchema, type SlaPolicy } from '@stringfield/shared';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { toast } from 'sonner';
+import { toast } from '@/lib/toast';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';

@@ -17,12 +17,17 @@ const statusLook: Record<WorkOrderStatus, { tone: BadgeTone; icon: IconName }> =
   cancelled: { tone: 'neutral', icon: 'close' },
 };
 
-/** The ticket's state in words, with an icon of its own so it reads without colour. */
-export function StatusBadge({ status, className }: { status: WorkOrderStatus; className?: string }) {
+/**
+ * The ticket's state in words, with an icon of its own so it reads without colour. Out of a table a
+ * bare "In field" says little to a screen reader, so the badge names itself ("Status: In field");
+ * `isInStatusColumn` leaves that off where a "Status" column header already says it.
+ */
+export function StatusBadge({ status, isInStatusColumn = false, className }: { status: WorkOrderStatus; isInStatusColumn?: boolean; className?: string }) {
   const look = statusLook[status];
   return (
     <Badge tone={look.tone} icon={look.icon} className={className}>
-      {workOrderStatusLabels[status]}
+      {isInStatusColumn ? null : <span className="sr-only">Status: </span>}
+      <span>{workOrderStatusLabels[status]}</span>
     </Badge>
   );
 }

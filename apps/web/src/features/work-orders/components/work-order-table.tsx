@@ -120,7 +120,7 @@ const baseColumns = [
     ),
     cell: (info) => (
       <span className="flex flex-col items-end gap-1 md:items-start">
-        <StatusBadge status={info.getValue()} />
+        <StatusBadge status={info.getValue()} isInStatusColumn />
         <span className="hidden text-sm md:block">
           <AssigneeName item={info.row.original} />
         </span>

@@ -1,0 +1,28 @@
+import { useEffect } from 'react';
+import { Toaster } from 'sonner';
+import { markToasterMounted } from '@/lib/toast';
+
+/** The app's toaster, in the house style; loaded lazily by the provider (see lib/toast.ts). */
+export function AppToaster() {
+  // Runs after Toaster's own effects, so it is subscribed when queued toasts are sent.
+  useEffect(() => markToasterMounted(), []);
+  return (
+    <Toaster
+      position="top-center"
+      closeButton
+      duration={6000}
+      gap={10}
+      offset={16}
+      toastOptions={{
+        classNames: {
+          toast: '!rounded-card !border-2 !border-edge !bg-surface !text-ink !text-base !font-sans !shadow-raised !p-4',
+          title: '!font-semibold',
+          description: '!text-ink-muted',
+          success: '!border-pass',
+          error: '!border-fail',
+          closeButton: '!border-edge !bg-surface !text-ink',
+        },
+      }}
+    />
+  );
+}

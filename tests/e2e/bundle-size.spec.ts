@@ -1,0 +1,61 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import zlib from 'node:zlib';
+import { expect, test } from '@playwright/test';
+
+// Issue 10: the technician's phone must get its first field page from under 200 KB of gzipped
+// script and style, whatever else the app grows. Counted from the built app (Vite's manifest): the
+// entry chunk with its static imports and CSS, plus the field page's route chunk with its own static
+// imports. Chunks loaded later on demand (a string's check form, charts, other pages) are not counted.
+
+const LIMIT_KB = 200;
+const dist = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../apps/web/dist');
+const fieldRoute = 'src/app/routes/field-checks.tsx';
+
+type ManifestChunk = { file: string; isEntry?: boolean; imports?: string[]; css?: string[] };
+type Manifest = Record<string, ManifestChunk>;
+
+function staticClosure(manifest: Manifest, key: string, seen = new Set<string>()): Set<string> {
+  if (seen.has(key)) return seen;
+  const chunk = manifest[key];
+  if (!chunk) throw new Error(`${key} is not in the Vite manifest`);
+  seen.add(key);
+  for (const imported of chunk.imports ?? []) staticClosure(manifest, imported, seen);
+  return seen;
+}
+
+function filesOf(manifest: Manifest, keys: Iterable<string>): string[] {
+  const files = new Set<string>();
+  for (const key of keys) {
+    const chunk = manifest[key]!;
+    files.add(chunk.file);
+    for (const css of chunk.css ?? []) files.add(css);
+  }
+  return [...files];
+}
+
+const gzipBytes = (file: string) => zlib.gzipSync(fs.readFileSync(path.join(dist, file)), { level: 9 }).length;
+const kb = (bytes: number) => Math.round((bytes / 1024) * 10) / 10;
+
+test('the technician’s first field page needs under 200 KB of gzipped JS and CSS', () => {
+  const manifestFile = path.join(dist, '.vite/manifest.json');
+  expect(fs.existsSync(manifestFile), `${manifestFile}: build the web app first (npm run build -w apps/web)`).toBe(true);
+  const manifest = JSON.parse(fs.readFileSync(manifestFile, 'utf8')) as Manifest;
+  const entry = Object.keys(manifest).find((key) => manifest[key]!.isEntry);
+  expect(entry, 'an entry chunk in the manifest').toBeDefined();
+
+  const entryFiles = filesOf(manifest, staticClosure(manifest, entry!));
+  const fieldFiles = filesOf(manifest, new Set([...staticClosure(manifest, entry!), ...staticClosure(manifest, fieldRoute)]));
+  const sizes = fieldFiles.map((file) => ({ file, gzipBytes: gzipBytes(file) })).sort((a, b) => b.gzipBytes - a.gzipBytes);
+  const entryBytes = sizes.filter((s) => entryFiles.includes(s.file)).reduce((sum, s) => sum + s.gzipBytes, 0);
+  const totalBytes = sizes.reduce((sum, s) => sum + s.gzipBytes, 0);
+
+  console.log(
+    [
+      `Technician's first field page: ${kb(totalBytes)} KB gzipped (limit ${LIMIT_KB} KB); the entry and its static imports alone: ${kb(entryBytes)} KB`,
+      ...sizes.map((s) => `  ${String(kb(s.gzipBytes)).padStart(6)} KB  ${s.file}`),
+    ].join('\n'),
+  );
+  expect(kb(totalBytes), 'gzipped KB of JS and CSS before the field page can render').toBeLessThan(LIMIT_KB);
+});
