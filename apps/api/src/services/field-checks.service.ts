@@ -1,4 +1,4 @@
-import { Op, type Transaction } from 'sequelize';
+import { Op, type CreationAttributes, type Transaction } from 'sequelize';
 import {
   ENGINE_VERSION,
   diagnoseStringCheck,
@@ -10,9 +10,11 @@ import { AppError, notFound } from '../lib/app-error.ts';
 import { Instrument, Inverter, IvTrace, ModuleModel, PvString, StringCheck, User, WorkOrder, WorkOrderString, sequelize } from '../models/index.ts';
 import { visibleSiteIds } from './site-access.ts';
 
-const PEER_WINDOW_MS = 15 * 60_000;
+/** Checks of other strings taken this close to a check (either side) count as its peers. */
+export const PEER_WINDOW_MS = 15 * 60_000;
 
-type Peer = { stringLabel: string; vocV: number; iscA: number | null; takenAt: string };
+export type Peer = { stringLabel: string; vocV: number; iscA: number | null; takenAt: string };
+type PeerCandidate = Pick<StringCheck, 'stringId' | 'vocV' | 'iscA' | 'takenAt'>;
 
 function parseJson<T>(raw: string | null, fallback: T): T {
   if (!raw) return fallback;
@@ -98,10 +100,14 @@ async function peersOf(s: PvString, takenAt: Date, transaction?: Transaction): P
     order: [['takenAt', 'DESC']],
     transaction,
   });
-  const label = new Map(neighbours.map((n) => [n.id, n.label]));
-  const latest = new Map<number, StringCheck>();
-  for (const c of checks) if (!latest.has(c.stringId)) latest.set(c.stringId, c);
-  return [...latest.values()].map((c) => ({ stringLabel: label.get(c.stringId)!, vocV: c.vocV, iscA: c.iscA, takenAt: c.takenAt.toISOString() }));
+  return latestPeers(checks, new Map(neighbours.map((n) => [n.id, n.label])));
+}
+
+/** The latest check of each neighbouring string, from current checks inside the peer window, newest first. */
+export function latestPeers(newestFirst: PeerCandidate[], labelOf: Map<number, string>): Peer[] {
+  const latest = new Map<number, PeerCandidate>();
+  for (const c of newestFirst) if (!latest.has(c.stringId)) latest.set(c.stringId, c);
+  return [...latest.values()].map((c) => ({ stringLabel: labelOf.get(c.stringId)!, vocV: c.vocV, iscA: c.iscA, takenAt: c.takenAt.toISOString() }));
 }
 
 type Judgement = {
@@ -177,6 +183,56 @@ function judge(input: StringCheckInput, module: ModuleModel, modulesInSeries: nu
   return { result, findings, verdict, isCalibrationOverdue: overdue.length > 0 };
 }
 
+/**
+ * The row a check is stored as: the reading as given plus what the engine made of it, judged against the
+ * peers and instruments passed in. Pure, so the demo seed stores exactly what the API would have.
+ */
+export function checkRow(args: {
+  input: StringCheckInput;
+  workOrderId: number;
+  technicianId: number;
+  string: Pick<PvString, 'id' | 'modulesInSeries'>;
+  module: ModuleModel;
+  peers: Peer[];
+  instruments: Instrument[];
+  supersedesId: number | null;
+}): CreationAttributes<StringCheck> {
+  const { input, peers } = args;
+  const j = judge(input, args.module, args.string.modulesInSeries, peers, args.instruments);
+  return {
+    clientId: input.clientId,
+    workOrderId: args.workOrderId,
+    stringId: args.string.id,
+    technicianId: args.technicianId,
+    phase: input.phase,
+    takenAt: new Date(input.takenAt),
+    vocV: input.vocV,
+    iscA: input.iscA ?? null,
+    operatingCurrentA: input.operatingCurrentA ?? null,
+    operatingVoltageV: input.operatingVoltageV ?? null,
+    irradianceWm2: input.irradianceWm2 ?? null,
+    irradianceMethod: input.irradianceMethod ?? null,
+    moduleTempC: input.moduleTempC ?? null,
+    moduleTempMethod: input.moduleTempMethod ?? null,
+    ambientC: input.ambientC ?? null,
+    polarityCorrect: input.polarityCorrect,
+    insulationPlusMOhm: input.insulationPlusMOhm ?? null,
+    insulationMinusMOhm: input.insulationMinusMOhm ?? null,
+    insulationTestVoltageV: input.insulationTestVoltageV ?? null,
+    instrumentIds: input.instrumentIds.join(','),
+    notes: input.notes,
+    expectedJson: j.result.expected ? JSON.stringify(j.result.expected) : null,
+    vocDeviationPct: j.result.vocDeviationPct,
+    iscDeviationPct: j.result.iscDeviationPct,
+    verdict: j.verdict,
+    findingsJson: JSON.stringify(j.findings),
+    peersJson: JSON.stringify(peers),
+    isCalibrationOverdue: j.isCalibrationOverdue,
+    engineVersion: ENGINE_VERSION,
+    supersedesId: args.supersedesId,
+  };
+}
+
 async function ticketForWork(user: SessionUser, workOrderId: number, transaction?: Transaction): Promise<WorkOrder> {
   const wo = await WorkOrder.findByPk(workOrderId, { transaction });
   if (!wo) throw notFound('That work order');
@@ -197,42 +253,9 @@ async function saveCheck(user: SessionUser, wo: WorkOrder, input: StringCheckInp
   if (instruments.length !== new Set(input.instrumentIds).size) {
     throw new AppError('VALIDATION_FAILED', 'An instrument is not in the register.', { instrumentIds: 'Unknown instrument' });
   }
-  const takenAt = new Date(input.takenAt);
-  const peers = await peersOf(s, takenAt, transaction);
-  const j = judge(input, s.moduleModel!, s.modulesInSeries, peers, instruments);
+  const peers = await peersOf(s, new Date(input.takenAt), transaction);
   const created = await StringCheck.create(
-    {
-      clientId: input.clientId,
-      workOrderId: wo.id,
-      stringId: s.id,
-      technicianId: user.id,
-      phase: input.phase,
-      takenAt,
-      vocV: input.vocV,
-      iscA: input.iscA ?? null,
-      operatingCurrentA: input.operatingCurrentA ?? null,
-      operatingVoltageV: input.operatingVoltageV ?? null,
-      irradianceWm2: input.irradianceWm2 ?? null,
-      irradianceMethod: input.irradianceMethod ?? null,
-      moduleTempC: input.moduleTempC ?? null,
-      moduleTempMethod: input.moduleTempMethod ?? null,
-      ambientC: input.ambientC ?? null,
-      polarityCorrect: input.polarityCorrect,
-      insulationPlusMOhm: input.insulationPlusMOhm ?? null,
-      insulationMinusMOhm: input.insulationMinusMOhm ?? null,
-      insulationTestVoltageV: input.insulationTestVoltageV ?? null,
-      instrumentIds: input.instrumentIds.join(','),
-      notes: input.notes,
-      expectedJson: j.result.expected ? JSON.stringify(j.result.expected) : null,
-      vocDeviationPct: j.result.vocDeviationPct,
-      iscDeviationPct: j.result.iscDeviationPct,
-      verdict: j.verdict,
-      findingsJson: JSON.stringify(j.findings),
-      peersJson: JSON.stringify(peers),
-      isCalibrationOverdue: j.isCalibrationOverdue,
-      engineVersion: ENGINE_VERSION,
-      supersedesId: supersedes?.id ?? null,
-    },
+    checkRow({ input, workOrderId: wo.id, technicianId: user.id, string: s, module: s.moduleModel!, peers, instruments, supersedesId: supersedes?.id ?? null }),
     { transaction },
   );
   if (supersedes) await supersedes.update({ supersededById: created.id }, { transaction });
