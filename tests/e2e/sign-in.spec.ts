@@ -54,3 +54,27 @@ test('a deep link survives sign-in', async ({ page }) => {
   await signIn(page, demoUsers.admin, undefined, '/people?role=technician');
   await expect(page).toHaveURL(/\/people\?.*role=technician/);
 });
+
+test('sign out everywhere ends the session on the other device too', async ({ browser }) => {
+  const phone = await browser.newContext({ viewport: viewports.phone });
+  const laptop = await browser.newContext({ viewport: viewports.desktop });
+  try {
+    const onPhone = await phone.newPage();
+    const onLaptop = await laptop.newPage();
+    await signIn(onPhone, demoUsers.supervisor);
+    await signIn(onLaptop, demoUsers.supervisor, undefined, '/settings');
+
+    await onLaptop.getByRole('button', { name: 'Sign out everywhere' }).click();
+    const dialog = onLaptop.getByRole('dialog', { name: 'Sign out on every device?' });
+    await expect(dialog).toBeVisible();
+    await onLaptop.screenshot({ path: screenshotPath('sign-out-everywhere-1280') });
+    await dialog.getByRole('button', { name: 'Sign out everywhere' }).click();
+    await expect(onLaptop).toHaveURL(/\/sign-in/);
+
+    await onPhone.reload();
+    await expect(onPhone).toHaveURL(/\/sign-in/);
+  } finally {
+    await phone.close();
+    await laptop.close();
+  }
+});

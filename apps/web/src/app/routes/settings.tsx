@@ -2,6 +2,7 @@ import { can } from '@stringfield/shared';
 import type { ReactNode } from 'react';
 import { Card } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
+import { SignOutEverywhere } from '@/features/auth/components/sign-out-everywhere';
 import { MailPreferencesForm } from '@/features/work-orders/components/mail-preferences-form';
 import { SlaPolicyEditor } from '@/features/work-orders/components/sla-policy-editor';
 import { useSessionUser } from '../session';
@@ -44,6 +45,13 @@ export function SettingsRoute() {
         description="Work-order mail you want to get. Everything you can see is still on the board."
       >
         <MailPreferencesForm />
+      </Panel>
+      <Panel
+        id="session-settings"
+        title="Signed-in devices"
+        description="Lost a phone, or left a shared computer signed in? End every session of yours at once."
+      >
+        <SignOutEverywhere />
       </Panel>
       {can(user.role, 'sla:manage') ? (
         <Panel

@@ -18,7 +18,9 @@ export const meQueryOptions = () =>
   queryOptions({
     queryKey: authKeys.me(),
     queryFn: ({ signal }) => getMe(signal),
-    staleTime: 5 * 60_000,
+    // Checked on every page load and when the window regains focus (a session can end on another
+    // device: sign out everywhere, deactivation); the kept copy shows meanwhile, and carries offline use.
+    staleTime: 0,
   });
 
 export function useMe() {
