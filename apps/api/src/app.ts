@@ -2,14 +2,13 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
 import session, { type Store } from 'express-session';
-import connectSessionSequelize from 'connect-session-sequelize';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { csrfSync } from 'csrf-sync';
 import { env } from './config/env.ts';
 import { logger } from './lib/logger.ts';
 import { passport } from './lib/passport.ts';
-import { sequelize } from './models/index.ts';
+import { MariaDbSessionStore } from './lib/session-store.ts';
 import { requestId } from './middleware/request-id.ts';
 import { errorHandler, notFoundApi } from './middleware/error-handler.ts';
 import { healthRouter } from './routes/health.routes.ts';
@@ -30,26 +29,14 @@ import { signOffRouter } from './routes/sign-off.routes.ts';
 import { fleetRouter } from './routes/fleet.routes.ts';
 import { meRouter, slaRouter, techniciansRouter, workOrdersRouter } from './routes/work-orders.routes.ts';
 
-const SequelizeStore = connectSessionSequelize(session.Store);
-
 export type AppOptions = {
   /** Serve the built web app from this folder (SPA fallback); omitted or missing → API only. */
   webDist?: string | null;
 };
 
-/** Sessions live in MariaDB so that any number of API processes share them. */
+/** Sessions live in MariaDB so that any number of API processes share them (see lib/session-store.ts). */
 export function createSessionStore(): Store {
-  return new SequelizeStore({
-    db: sequelize,
-    table: 'Session',
-    checkExpirationInterval: 15 * 60 * 1000,
-    expiration: env.SESSION_MAX_AGE_HOURS * 60 * 60 * 1000,
-    extendDefaultFields: (defaults: { data: string; expires: Date }, s: { passport?: { user?: number } }) => ({
-      data: defaults.data,
-      expires: defaults.expires,
-      userId: s.passport?.user ?? null,
-    }),
-  });
+  return new MariaDbSessionStore();
 }
 
 /** Builds the Express app; never listens (tests import it). */
