@@ -1,0 +1,153 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import { once } from 'node:events';
+import net from 'node:net';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { Session } from '../../apps/api/src/models/index.ts';
+import { DEMO_PASSWORD, demoEmail, resetDatabase } from './helpers.ts';
+import { apiTestEnv } from './test-env.ts';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
+
+async function freePort(): Promise<number> {
+  return new Promise((resolve) => {
+    const s = net.createServer().listen(0, '127.0.0.1', () => {
+      const { port } = s.address() as net.AddressInfo;
+      s.close(() => resolve(port));
+    });
+  });
+}
+
+type Api = { child: ChildProcess; base: string };
+const running = new Set<ChildProcess>();
+
+/**
+ * The real server entry in its own process, on its own loopback port, on this slot's database. Node runs
+ * it with tsx as a loader (not the tsx command, which forks the server as a second process: a SIGKILL
+ * would then kill the wrapper and leave the server running).
+ */
+async function startApi(port: number): Promise<Api> {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/api/src/server.ts'], {
+    cwd: root,
+    env: { ...process.env, ...apiTestEnv, PORT: String(port), LOG_LEVEL: 'fatal' },
+    stdio: 'ignore',
+  });
+  running.add(child);
+  child.once('exit', () => running.delete(child));
+  const base = `http://127.0.0.1:${port}`;
+  const deadline = Date.now() + 30_000;
+  while (
+    !(await fetch(`${base}/api/health`)
+      .then((r) => r.ok)
+      .catch(() => false))
+  ) {
+    if (child.exitCode !== null) throw new Error(`the API on port ${port} exited with ${child.exitCode}`);
+    if (Date.now() > deadline) throw new Error(`the API on port ${port} did not start within 30 s`);
+    await new Promise((r) => setTimeout(r, 150));
+  }
+  return { child, base };
+}
+
+/** A browser-like client: one session cookie, sent to whichever process it talks to. */
+class Browser {
+  cookie = '';
+  csrf = '';
+  async call(base: string, method: string, url: string, body?: unknown, csrf = this.csrf) {
+    const headers: Record<string, string> = { cookie: this.cookie };
+    if (body !== undefined) headers['content-type'] = 'application/json';
+    if (method !== 'GET' && csrf) headers['x-csrf-token'] = csrf;
+    const res = await fetch(base + url, {
+      method,
+      headers,
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+    const set = res.headers.getSetCookie().find((c) => c.startsWith('sf.sid='));
+    if (set) this.cookie = set.split(';')[0]!;
+    const text = await res.text();
+    return { status: res.status, body: text ? (JSON.parse(text) as Record<string, unknown>) : {} };
+  }
+  async fetchCsrf(base: string) {
+    const res = await this.call(base, 'GET', '/api/auth/csrf');
+    expect(res.status).toBe(200);
+    this.csrf = res.body.csrfToken as string;
+  }
+}
+
+const sidOf = (cookie: string) =>
+  decodeURIComponent(cookie.slice('sf.sid='.length)).replace(/^s:/, '').split('.')[0]!;
+
+let a: Api;
+let b: Api;
+let portA = 0;
+
+beforeAll(async () => {
+  await resetDatabase();
+  portA = await freePort();
+  [a, b] = await Promise.all([startApi(portA), freePort().then(startApi)]);
+}, 60_000);
+
+afterAll(async () => {
+  await Promise.all(
+    [...running].map(async (child) => {
+      child.kill('SIGTERM');
+      await once(child, 'exit');
+    }),
+  );
+});
+
+describe('two API processes sharing the session store', () => {
+  it('keeps a session signed in on A working on B after A is killed, and a sign-out on B ends it everywhere', async () => {
+    const browser = new Browser();
+    await browser.fetchCsrf(a.base);
+    const login = await browser.call(a.base, 'POST', '/api/auth/login', {
+      email: demoEmail.dispatcher,
+      password: DEMO_PASSWORD,
+    });
+    expect(login.status).toBe(200);
+    await browser.fetchCsrf(a.base);
+    expect((await browser.call(a.base, 'GET', '/api/auth/me')).status).toBe(200);
+
+    // A dies without a chance to clean up; a replacement comes up on A's port meanwhile.
+    a.child.kill('SIGKILL');
+    await once(a.child, 'exit');
+    await expect(fetch(`${a.base}/api/health`)).rejects.toThrow();
+    const restarted = startApi(portA);
+
+    const me = await browser.call(b.base, 'GET', '/api/auth/me');
+    expect(me.status).toBe(200);
+    expect(me.body.user).toMatchObject({ email: demoEmail.dispatcher, role: 'dispatcher' });
+
+    // A write on B with the CSRF token that A handed out: the token lives in the shared session.
+    const refused = await browser.call(
+      b.base,
+      'PUT',
+      '/api/me/mail-preferences',
+      { optOut: ['overdue'] },
+      'not-the-token',
+    );
+    expect(refused.status).toBe(403);
+    const saved = await browser.call(b.base, 'PUT', '/api/me/mail-preferences', { optOut: ['overdue'] });
+    expect(saved.status).toBe(200);
+    expect(saved.body).toMatchObject({ optOut: ['overdue'] });
+
+    const a2 = await restarted;
+    expect((await browser.call(a2.base, 'GET', '/api/auth/me')).status).toBe(200);
+    expect((await browser.call(a2.base, 'GET', '/api/me/mail-preferences')).body).toMatchObject({
+      optOut: ['overdue'],
+    });
+
+    const sid = sidOf(browser.cookie);
+    expect(await Session.count({ where: { sid } })).toBe(1);
+    const signedOutCookie = browser.cookie;
+    expect((await browser.call(b.base, 'POST', '/api/auth/logout', {})).status).toBe(204);
+    expect(await Session.count({ where: { sid } })).toBe(0);
+
+    browser.cookie = signedOutCookie;
+    const onB = await browser.call(b.base, 'GET', '/api/auth/me');
+    expect(onB.status).toBe(401);
+    expect((onB.body.error as { code: string }).code).toBe('UNAUTHENTICATED');
+    browser.cookie = signedOutCookie;
+    expect((await browser.call(a2.base, 'GET', '/api/auth/me')).status).toBe(401);
+  }, 30_000);
+});
