@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
 import session, { type Store } from 'express-session';
+import compression from 'compression';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { csrfSync } from 'csrf-sync';
@@ -60,7 +61,8 @@ export function createApp(options: AppOptions = {}): Express {
           defaultSrc: ["'self'"],
           scriptSrc: ["'self'"],
           styleSrc: ["'self'", "'unsafe-inline'"],
-          imgSrc: ["'self'", 'data:', 'blob:'],
+          // Photos on S3-compatible storage come from short-lived signed URLs of the bucket's own origin.
+          imgSrc: ["'self'", 'data:', 'blob:', ...s3ImageOrigins()],
           fontSrc: ["'self'"],
           connectSrc: ["'self'"],
           frameSrc: ["'self'"],
@@ -74,6 +76,9 @@ export function createApp(options: AppOptions = {}): Express {
       crossOriginEmbedderPolicy: false,
     }),
   );
+
+  // gzip for text (the web app's scripts and styles, JSON, CSV exports); images and PDFs are left as they are.
+  app.use(compression());
 
   app.use('/api/health', healthRouter());
 
@@ -148,4 +153,11 @@ export function createApp(options: AppOptions = {}): Express {
 
   app.use(errorHandler);
   return app;
+}
+
+/** Where signed photo URLs point when evidence lives on S3: the endpoint, or the bucket's virtual host. */
+function s3ImageOrigins(): string[] {
+  if (!env.s3) return [];
+  const endpoint = new URL(env.s3.endpoint);
+  return env.s3.forcePathStyle ? [endpoint.origin] : [`${endpoint.protocol}//${env.s3.bucket}.${endpoint.host}`];
 }
