@@ -2,28 +2,16 @@
 // automatically when the bench database is empty). Loopback only, bounded in count and time (about two
 // minutes besides seeding: four load runs of 20 s and the single-client timings).
 // The photo pipeline has its own bench (tests/load/bench-photo.ts).
-import { spawn, execFileSync } from 'node:child_process';
+import { execFileSync } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
 import mariadb from 'mariadb';
 import { seedScale, benchDb } from './seed-scale.ts';
+import { Client, freePort, root, rssOfTree, startApi, stats } from './lib.ts';
 
-const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
-// A free port unless BENCH_PORT says otherwise: a fixed one may already serve someone else's API (another
-// checkout's browser suite, say), and the bench would then measure that one.
-async function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const s = net.createServer().listen(0, '127.0.0.1', () => {
-      const { port: p } = s.address() as net.AddressInfo;
-      s.close(() => resolve(p));
-    });
-  });
-}
 const port = process.env.BENCH_PORT ? Number(process.env.BENCH_PORT) : await freePort();
 const base = `http://127.0.0.1:${port}`;
 const dbPort = Number(process.env.DB_PORT ?? 3307);
@@ -40,40 +28,7 @@ const say = (line: string) => {
   process.stdout.write(`${line}\n`);
 };
 
-function stats(ms: number[]) {
-  const s = [...ms].sort((a, b) => a - b);
-  const at = (p: number) => s[Math.min(s.length - 1, Math.floor(p * s.length))]!;
-  return { median: at(0.5), p95: at(0.95), p99: at(0.99), n: s.length };
-}
 const fmt = (x: number) => `${x.toFixed(1)} ms`;
-
-class Client {
-  cookie = '';
-  csrf = '';
-  async request(method: string, url: string, body?: unknown, extraHeaders: Record<string, string> = {}) {
-    const headers: Record<string, string> = { cookie: this.cookie, ...extraHeaders };
-    if (body !== undefined && !(body instanceof FormData)) headers['content-type'] = 'application/json';
-    if (method !== 'GET') headers['x-csrf-token'] = this.csrf;
-    const res = await fetch(base + url, {
-      method,
-      headers,
-      body: body instanceof FormData ? body : body === undefined ? undefined : JSON.stringify(body),
-    });
-    const set = res.headers.getSetCookie().find((c) => c.startsWith('sf.sid='));
-    if (set) this.cookie = set.split(';')[0]!;
-    return res;
-  }
-  async signIn(email: string) {
-    this.csrf = (
-      (await (await this.request('GET', '/api/auth/csrf')).json()) as { csrfToken: string }
-    ).csrfToken;
-    const res = await this.request('POST', '/api/auth/login', { email, password: 'stringfield-demo' });
-    if (!res.ok) throw new Error(`sign-in failed: ${res.status}`);
-    this.csrf = (
-      (await (await this.request('GET', '/api/auth/csrf')).json()) as { csrfToken: string }
-    ).csrfToken;
-  }
-}
 
 async function time(n: number, fn: () => Promise<unknown>) {
   const ms: number[] = [];
@@ -83,27 +38,6 @@ async function time(n: number, fn: () => Promise<unknown>) {
     ms.push(performance.now() - t);
   }
   return stats(ms);
-}
-
-function rssOfTree(pid: number): number {
-  let total = 0;
-  const walk = (p: number) => {
-    try {
-      const status = fs.readFileSync(`/proc/${p}/status`, 'utf8');
-      total += Number(/VmRSS:\s+(\d+)/.exec(status)?.[1] ?? 0) * 1024;
-      const kids = fs
-        .readFileSync(`/proc/${p}/task/${p}/children`, 'utf8')
-        .trim()
-        .split(/\s+/)
-        .filter(Boolean)
-        .map(Number);
-      kids.forEach(walk);
-    } catch {
-      /* gone */
-    }
-  };
-  walk(pid);
-  return total;
 }
 
 /** 32 connections for `loadSeconds`; the figures autocannon reports, on one line. */
@@ -169,36 +103,12 @@ async function main() {
   );
   await db.query("DELETE FROM rate_limit_hits WHERE `key` LIKE 'login:%'");
 
-  const server = spawn(path.join(root, 'node_modules/.bin/tsx'), ['apps/api/src/server.ts'], {
-    cwd: root,
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      SESSION_SECRET: 'stringfield-benchmark-session-secret-0123456789',
-      DB_NAME: benchDb,
-      PORT: String(port),
-      LOG_LEVEL: 'warn',
-      SMTP_URL: 'smtp://127.0.0.1:1',
-      UPLOADS_DIR: path.join(root, '.data/uploads-bench'),
-    },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  const server = await startApi(port, { DB_NAME: benchDb, UPLOADS_DIR: path.join(root, '.data/uploads-bench') });
   try {
-    const deadline = Date.now() + 60_000;
-    while (
-      !(await fetch(`${base}/api/health`)
-        .then((r) => r.ok)
-        .catch(() => false))
-    ) {
-      if (server.exitCode !== null)
-        throw new Error(`the API exited (code ${server.exitCode}); is port ${port} taken?`);
-      if (Date.now() > deadline) throw new Error('API did not start');
-      await new Promise((r) => setTimeout(r, 300));
-    }
     say(
       `Stringfield API benchmark — ${new Date().toISOString()} — ${process.platform} ${process.arch}, Node ${process.version}, ${os.cpus().length} cores (${load()} at start)`,
     );
-    const dispatcher = new Client();
+    const dispatcher = new Client(base);
     await dispatcher.signIn('dispatcher@stringfield.test');
 
     // ---- one client at a time ----
@@ -357,7 +267,7 @@ async function main() {
 
     // Check submission: the assigned technician records a string check; a new client id per request, so
     // that each one is a real insert (a repeated id would be answered from the first one, 200 not 201).
-    const tech = new Client();
+    const tech = new Client(base);
     await tech.signIn('tech@stringfield.test');
     const mine = (await (
       await tech.request('GET', '/api/work-orders?assigneeId=me&status=in_field&pageSize=1')

@@ -2,13 +2,11 @@
 // loopback, with the API server's memory (RSS of its process tree) sampled while the rows flow.
 // Builds its own database (stringfield_export_bench: one site, 400 strings, 1,000,000 checks) with the
 // scale seeder when it is missing. Figures go to .data/reports/bench-export.txt.
-import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import mariadb from 'mariadb';
+import { Client, root, rssOfTree, startApi } from './lib.ts';
 
-const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const dbName = 'stringfield_export_bench';
 const rowsWanted = 1_000_000;
 const port = Number(process.env.BENCH_PORT ?? 8096);
@@ -20,25 +18,6 @@ const say = (line: string) => {
   process.stdout.write(`${line}\n`);
 };
 const mb = (bytes: number) => `${(bytes / 1e6).toFixed(0)} MB`;
-
-function rssOfTree(pid: number): number {
-  let total = 0;
-  const walk = (p: number) => {
-    try {
-      total += Number(/VmRSS:\s+(\d+)/.exec(fs.readFileSync(`/proc/${p}/status`, 'utf8'))?.[1] ?? 0) * 1024;
-      fs.readFileSync(`/proc/${p}/task/${p}/children`, 'utf8')
-        .trim()
-        .split(/\s+/)
-        .filter(Boolean)
-        .map(Number)
-        .forEach(walk);
-    } catch {
-      /* gone */
-    }
-  };
-  walk(pid);
-  return total;
-}
 
 async function checksInDb(): Promise<number> {
   const conn = await mariadb
@@ -89,30 +68,8 @@ async function main() {
   )) as Array<{ n: bigint }>;
   await conn.end();
 
-  const server = spawn(path.join(root, 'node_modules/.bin/tsx'), ['apps/api/src/server.ts'], {
-    cwd: root,
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      SESSION_SECRET: 'stringfield-benchmark-session-secret-0123456789',
-      DB_NAME: dbName,
-      PORT: String(port),
-      LOG_LEVEL: 'warn',
-      SMTP_URL: 'smtp://127.0.0.1:1',
-      UPLOADS_DIR: path.join(root, '.data/uploads-bench'),
-    },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  const server = await startApi(port, { DB_NAME: dbName, UPLOADS_DIR: path.join(root, '.data/uploads-bench') });
   try {
-    const deadline = Date.now() + 60_000;
-    while (
-      !(await fetch(`${base}/api/health`)
-        .then((r) => r.ok)
-        .catch(() => false))
-    ) {
-      if (Date.now() > deadline) throw new Error('API did not start');
-      await new Promise((r) => setTimeout(r, 300));
-    }
     const os = await import('node:os');
     say(
       `Stringfield export benchmark — ${new Date().toISOString()} — ${process.platform} ${process.arch}, Node ${process.version}, ${os.cpus().length} cores, load average ${os
@@ -121,20 +78,9 @@ async function main() {
         .join(' ')}`,
     );
 
-    const cookieOf = (res: Response) =>
-      res.headers
-        .getSetCookie()
-        .map((c) => c.split(';')[0])
-        .join('; ');
-    const first = await fetch(`${base}/api/auth/csrf`);
-    const { csrfToken } = (await first.json()) as { csrfToken: string };
-    const login = await fetch(`${base}/api/auth/login`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json', 'x-csrf-token': csrfToken, cookie: cookieOf(first) },
-      body: JSON.stringify({ email: 'dispatcher@stringfield.test', password: 'stringfield-demo' }),
-    });
-    if (!login.ok) throw new Error(`sign-in failed: ${login.status}`);
-    const cookie = cookieOf(login);
+    const dispatcher = new Client(base);
+    await dispatcher.signIn('dispatcher@stringfield.test');
+    const cookie = dispatcher.cookie;
 
     const to = new Date().toISOString().slice(0, 10);
     const from = new Date(Date.now() - 500 * 86_400_000).toISOString().slice(0, 10);

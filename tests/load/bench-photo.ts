@@ -8,9 +8,8 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { Client, root, rssOfTree, startApi, stats, tsx } from './lib.ts';
 
-const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
-const tsx = path.join(root, 'node_modules/.bin/tsx');
 const runs = 10;
 
 type PipelineResult = {
@@ -23,37 +22,13 @@ type PipelineResult = {
   sharp: string;
 };
 
-function stats(ms: number[]) {
-  const s = [...ms].sort((a, b) => a - b);
-  const at = (p: number) => s[Math.min(s.length - 1, Math.floor(p * s.length))]!;
-  return { median: at(0.5), p95: at(0.95) };
-}
-
 /** VmRSS / VmHWM of this process from /proc, in MB (10^6 bytes). */
 function procMb(field: 'VmRSS' | 'VmHWM', pid: number | 'self' = 'self'): number {
   const status = fs.readFileSync(`/proc/${pid}/status`, 'utf8');
   return (Number(new RegExp(`${field}:\\s+(\\d+)`).exec(status)?.[1] ?? 0) * 1024) / 1e6;
 }
 
-function rssOfTreeMb(pid: number): number {
-  let total = 0;
-  const walk = (p: number) => {
-    try {
-      total += procMb('VmRSS', p);
-      const kids = fs
-        .readFileSync(`/proc/${p}/task/${p}/children`, 'utf8')
-        .trim()
-        .split(/\s+/)
-        .filter(Boolean)
-        .map(Number);
-      kids.forEach(walk);
-    } catch {
-      /* gone */
-    }
-  };
-  walk(pid);
-  return total;
-}
+const rssOfTreeMb = (pid: number) => rssOfTree(pid) / 1e6;
 
 /** Child mode: only the service module and the photo are loaded before the baseline is taken. */
 async function childPipeline(file: string): Promise<void> {
@@ -106,35 +81,6 @@ function runChild(file: string, extraEnv: Record<string, string> = {}): Promise<
   });
 }
 
-class Client {
-  cookie = '';
-  csrf = '';
-  constructor(private readonly base: string) {}
-  async request(method: string, url: string, body?: unknown) {
-    const headers: Record<string, string> = { cookie: this.cookie };
-    if (body !== undefined && !(body instanceof FormData)) headers['content-type'] = 'application/json';
-    if (method !== 'GET') headers['x-csrf-token'] = this.csrf;
-    const res = await fetch(this.base + url, {
-      method,
-      headers,
-      body: body instanceof FormData ? body : body === undefined ? undefined : JSON.stringify(body),
-    });
-    const set = res.headers.getSetCookie().find((c) => c.startsWith('sf.sid='));
-    if (set) this.cookie = set.split(';')[0]!;
-    return res;
-  }
-  async signIn(email: string) {
-    this.csrf = (
-      (await (await this.request('GET', '/api/auth/csrf')).json()) as { csrfToken: string }
-    ).csrfToken;
-    const res = await this.request('POST', '/api/auth/login', { email, password: 'stringfield-demo' });
-    if (!res.ok) throw new Error(`sign-in failed: ${res.status}`);
-    this.csrf = (
-      (await (await this.request('GET', '/api/auth/csrf')).json()) as { csrfToken: string }
-    ).csrfToken;
-  }
-}
-
 async function concurrentUploads(photo: Buffer, say: (line: string) => void): Promise<void> {
   const port = Number(process.env.BENCH_PHOTO_PORT ?? 8097);
   const base = `http://127.0.0.1:${port}`;
@@ -170,21 +116,8 @@ async function concurrentUploads(photo: Buffer, say: (line: string) => void): Pr
   });
   execFileSync(tsx, ['apps/api/src/cli/seed.ts'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
 
-  const server = spawn(tsx, ['apps/api/src/server.ts'], {
-    cwd: root,
-    env,
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  const server = await startApi(port, { DB_NAME: dbName, UPLOADS_DIR: uploads, LOGIN_RATE_LIMIT: '1000' });
   try {
-    const deadline = Date.now() + 60_000;
-    while (
-      !(await fetch(`${base}/api/health`)
-        .then((r) => r.ok)
-        .catch(() => false))
-    ) {
-      if (Date.now() > deadline) throw new Error('API did not start');
-      await new Promise((r) => setTimeout(r, 300));
-    }
     const tech = new Client(base);
     await tech.signIn('tech@stringfield.test');
     const mine = (await (
