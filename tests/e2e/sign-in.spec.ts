@@ -63,6 +63,9 @@ test('sign out everywhere ends the session on the other device too', async ({ br
     const onLaptop = await laptop.newPage();
     await signIn(onPhone, demoUsers.supervisor);
     await signIn(onLaptop, demoUsers.supervisor, undefined, '/settings');
+    await onPhone.goto('/settings');
+    await onPhone.getByRole('heading', { name: 'Signed-in devices' }).scrollIntoViewIfNeeded();
+    await onPhone.screenshot({ path: screenshotPath('sign-out-everywhere-360') });
 
     await onLaptop.getByRole('button', { name: 'Sign out everywhere' }).click();
     const dialog = onLaptop.getByRole('dialog', { name: 'Sign out on every device?' });
