@@ -27,12 +27,15 @@ const running = new Set<ChildProcess>();
  * it with tsx as a loader (not the tsx command, which forks the server as a second process: a SIGKILL
  * would then kill the wrapper and leave the server running).
  */
-async function startApi(port: number): Promise<Api> {
+async function startApi(port: number, logLevel = 'fatal'): Promise<Api & { output: () => string }> {
   const child = spawn(process.execPath, ['--import', 'tsx', 'apps/api/src/server.ts'], {
     cwd: root,
-    env: { ...process.env, ...apiTestEnv, PORT: String(port), LOG_LEVEL: 'fatal' },
-    stdio: 'ignore',
+    env: { ...process.env, ...apiTestEnv, PORT: String(port), LOG_LEVEL: logLevel },
+    stdio: ['ignore', 'pipe', 'pipe'],
   });
+  let output = '';
+  child.stdout.on('data', (chunk: Buffer) => (output += chunk.toString()));
+  child.stderr.on('data', (chunk: Buffer) => (output += chunk.toString()));
   running.add(child);
   child.once('exit', () => running.delete(child));
   const base = `http://127.0.0.1:${port}`;
@@ -46,7 +49,7 @@ async function startApi(port: number): Promise<Api> {
     if (Date.now() > deadline) throw new Error(`the API on port ${port} did not start within 30 s`);
     await new Promise((r) => setTimeout(r, 150));
   }
-  return { child, base };
+  return { child, base, output: () => output };
 }
 
 /** A browser-like client: one session cookie, sent to whichever process it talks to. */
@@ -82,7 +85,7 @@ let b: Api;
 let portA = 0;
 
 beforeAll(async () => {
-  await resetDatabase();
+  await resetDatabase({ plant: true }); // tickets for the shutdown test's ticket pages
   portA = await freePort();
   [a, b] = await Promise.all([startApi(portA), freePort().then(startApi)]);
 }, 60_000);
@@ -149,5 +152,37 @@ describe('two API processes sharing the session store', () => {
     expect((onB.body.error as { code: string }).code).toBe('UNAUTHENTICATED');
     browser.cookie = signedOutCookie;
     expect((await browser.call(a2.base, 'GET', '/api/auth/me')).status).toBe(401);
+  }, 30_000);
+});
+
+describe('a process told to stop (SIGTERM)', () => {
+  it('lets the handlers of clients that hung up finish before it closes its database pool', async () => {
+    const c = await startApi(await freePort(), 'warn');
+    const browser = new Browser();
+    await browser.fetchCsrf(c.base);
+    expect(
+      (await browser.call(c.base, 'POST', '/api/auth/login', { email: demoEmail.dispatcher, password: DEMO_PASSWORD }))
+        .status,
+    ).toBe(200);
+    const { port } = new URL(c.base);
+    const ticket = (await browser.call(c.base, 'GET', '/api/work-orders?pageSize=1')).body.items as Array<{ id: number }>;
+    // 100 ticket pages at once (several queries each, more requests than the pool's 10 connections), each
+    // client gone before its answer.
+    const sockets = Array.from({ length: 100 }, (_, i) => {
+      const socket = net.connect(Number(port), '127.0.0.1');
+      socket.on('error', () => {});
+      socket.write(
+        `GET ${i % 2 ? `/api/work-orders/${ticket[0]!.id}` : '/api/work-orders?pageSize=100'} HTTP/1.1\r\nHost: 127.0.0.1\r\nCookie: ${browser.cookie}\r\n\r\n`,
+      );
+      return socket;
+    });
+    await new Promise((r) => setTimeout(r, 20));
+    for (const socket of sockets) socket.destroy();
+    c.child.kill('SIGTERM');
+    const [code] = (await once(c.child, 'exit')) as [number | null];
+    // Before: the pool closed under the running handlers ("…called after the connection manager was
+    // closed", logged as unhandled errors) — here every handler ended cleanly and the process exits 0.
+    expect(c.output()).not.toMatch(/connection manager was closed|"level":50/);
+    expect(code).toBe(0);
   }, 30_000);
 });

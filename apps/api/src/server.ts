@@ -16,20 +16,48 @@ server.on('error', (err) => {
 const stopSweep = startMailSweep();
 const stopOverdue = startOverdueSweep();
 
+type PoolGauge = { using: number; waiting: number };
+
+/**
+ * Resolves once no database connection has been in use or awaited for `quietMs` on end (false after
+ * `timeoutMs`). A client that hangs up does not stop its handler — a check being saved, a session being
+ * written — and its socket closing says nothing about that work, but the pool does.
+ */
+function databaseQuiet(quietMs: number, timeoutMs: number): Promise<boolean> {
+  const pool = (sequelize.connectionManager as unknown as { pool?: PoolGauge }).pool;
+  if (!pool || typeof pool.using !== 'number') return Promise.resolve(true);
+  const deadline = Date.now() + timeoutMs;
+  let quietSince = Date.now();
+  return new Promise((resolve) => {
+    const timer = setInterval(() => {
+      if (pool.using > 0 || pool.waiting > 0) quietSince = Date.now();
+      else if (Date.now() - quietSince >= quietMs) {
+        clearInterval(timer);
+        resolve(true);
+      }
+      if (Date.now() > deadline) {
+        clearInterval(timer);
+        resolve(false);
+      }
+    }, 10);
+  });
+}
+
 let closing = false;
-function shutdown(signal: string) {
+async function shutdown(signal: string) {
   if (closing) return;
   closing = true;
   logger.info({ signal }, 'shutting down');
+  setTimeout(() => process.exit(1), 10_000).unref();
   stopSweep();
   stopOverdue();
-  server.close(() => {
-    void mailIdle().finally(() => {
-      closeMailer();
-      void sequelize.close().finally(() => process.exit(0));
-    });
-  });
-  setTimeout(() => process.exit(1), 10_000).unref();
+  // No new connections; idle keep-alive ones close now, busy ones once their response is out.
+  await new Promise<void>((resolve) => server.close(() => resolve()));
+  if (!(await databaseQuiet(200, 7_000))) logger.warn('database work still running at shutdown; closing anyway');
+  await mailIdle();
+  closeMailer();
+  await sequelize.close();
+  process.exit(0);
 }
-process.on('SIGTERM', () => shutdown('SIGTERM'));
-process.on('SIGINT', () => shutdown('SIGINT'));
+process.on('SIGTERM', () => void shutdown('SIGTERM'));
+process.on('SIGINT', () => void shutdown('SIGINT'));
