@@ -199,7 +199,8 @@ async function main() {
       `  RSS: baseline ${r.baselineMb.toFixed(0)} MB (modules loaded, photo read), peak ${r.peakMb.toFixed(0)} MB (VmHWM), pipeline's own ${(r.peakMb - r.baselineMb).toFixed(0)} MB (target peak < 300 MB)`,
     );
     // glibc gives each libvips worker thread its own malloc arena; capping them shows how much of the peak is
-    // allocator fragmentation rather than pixels. Informational: the server is not started this way.
+    // allocator fragmentation rather than pixels. npm start runs the API this way (and so does the upload
+    // run below, through tests/load/lib.ts).
     const capped = await runChild(file, { MALLOC_ARENA_MAX: '2' });
     say(
       `  same with MALLOC_ARENA_MAX=2: median ${capped.medianMs.toFixed(1)} ms; RSS baseline ${capped.baselineMb.toFixed(0)} MB, peak ${capped.peakMb.toFixed(0)} MB, pipeline's own ${(capped.peakMb - capped.baselineMb).toFixed(0)} MB`,

@@ -44,7 +44,7 @@ export function freePort(): Promise<number> {
 export async function startApi(port: number, env: Record<string, string>): Promise<ChildProcess> {
   const server = spawn(tsx, ['apps/api/src/server.ts'], {
     cwd: root,
-    env: { ...process.env, NODE_ENV: 'production', SESSION_SECRET: 'stringfield-benchmark-session-secret-0123456789', LOG_LEVEL: 'warn', SMTP_URL: 'smtp://127.0.0.1:1', ...env, PORT: String(port) },
+    env: { MALLOC_ARENA_MAX: '2', ...process.env, NODE_ENV: 'production', SESSION_SECRET: 'stringfield-benchmark-session-secret-0123456789', LOG_LEVEL: 'warn', SMTP_URL: 'smtp://127.0.0.1:1', ...env, PORT: String(port) },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   const deadline = Date.now() + 60_000;
