@@ -299,6 +299,27 @@ describe('CSV exports', () => {
     await admin.get('/api/fleet/exports/tickets.csv?from=2026-10-01&to=2026-10-31').expect(400);
   });
 
+  it('writes text that a spreadsheet would run as a formula as plain text, and keeps negative numbers numbers', async () => {
+    // OWASP, "CSV Injection": a cell starting with =, +, -, @, tab or carriage return is prefixed with '.
+    const ticket = (await WorkOrder.findOne({ where: { number: 'WO-2026-90001' } }))!;
+    const title = ticket.title;
+    await ticket.update({ title: '=HYPERLINK("http://example.invalid","open")' });
+    try {
+      const res = await text(
+        admin,
+        `/api/fleet/exports/tickets.csv?siteId=${site.id}&from=2026-10-01&to=2026-10-31`,
+      ).expect(200);
+      expect(res.body as string).toContain(`fuse,"'=HYPERLINK(""http://example.invalid"",""open"")",`);
+    } finally {
+      await ticket.update({ title });
+    }
+    const checks = await text(
+      admin,
+      `/api/fleet/exports/checks.csv?siteId=${site.id}&from=2026-10-01&to=2026-10-31`,
+    ).expect(200);
+    expect(checks.body as string).toMatch(/,-10,0,fail/);
+  });
+
   it('gives the database connection back when a download is cancelled half-way', async () => {
     // 20,000 copies of a fixture check: far more than one socket buffer, so the export is still
     // streaming when the client goes away.

@@ -165,7 +165,9 @@ export async function exportCsv(
       cb(null, e.row(row));
     },
   });
-  const csv = stringify({ header: true, columns: e.columns, bom: true });
+  // Free text (ticket titles, names, serials) must not run as a spreadsheet formula when the file is
+  // opened: csv-stringify prefixes text starting with = + - @ tab or CR with a quote; numbers stay numbers.
+  const csv = stringify({ header: true, columns: e.columns, bom: true, escape_formulas: true });
   // One pipeline, so that a failure or a cancelled download anywhere tears down every stage, the
   // database stream included (see streamRows). Errors reach the caller through the last stage.
   const stream = pipeline(rows, toRecord, csv, () => {});
