@@ -277,12 +277,18 @@ function parseChanges(raw: string | null): WorkOrderEventDto['changes'] {
 
 export async function listEvents(user: SessionUser, id: number): Promise<WorkOrderEventDto[]> {
   await findVisible(user, id);
+  return timeline(id);
+}
+
+/** A ticket's history and comments, oldest first (the caller has checked that the user may see it). */
+async function timeline(id: number): Promise<WorkOrderEventDto[]> {
   const [events, comments] = await Promise.all([
     WorkOrderEvent.findAll({ where: { workOrderId: id }, include: [{ model: User, as: 'actor', attributes: ['id', 'name'] }], order: [['id', 'ASC']] }),
     Comment.findAll({ where: { workOrderId: id }, order: [['id', 'ASC']] }),
   ]);
+  const authorIds = [...new Set(comments.map((c) => c.authorId))];
   const authors = new Map(
-    (await User.findAll({ where: { id: [...new Set(comments.map((c) => c.authorId))] }, attributes: ['id', 'name'] })).map((u) => [u.id, u]),
+    (authorIds.length ? await User.findAll({ where: { id: authorIds }, attributes: ['id', 'name'] }) : []).map((u) => [u.id, u]),
   );
   const dto: WorkOrderEventDto[] = events.map((e) => ({
     id: e.id,
@@ -314,10 +320,15 @@ export async function getWorkOrder(user: SessionUser, id: number): Promise<WorkO
     include: [...listIncludes, { model: User, as: 'createdBy', attributes: ['id', 'name'] }],
   });
   if (!wo) throw notFound('That work order');
-  const strings = await WorkOrderString.findAll({
-    where: { workOrderId: id },
-    include: [{ model: PvString, as: 'string', attributes: ['id', 'label', 'mpptInput'], include: [{ model: Inverter, as: 'inverter', attributes: ['tag'] }] }],
-  });
+  // The rest depends only on the ticket, which the user may see: asked at once.
+  const [strings, events, suggestion] = await Promise.all([
+    WorkOrderString.findAll({
+      where: { workOrderId: id },
+      include: [{ model: PvString, as: 'string', attributes: ['id', 'label', 'mpptInput'], include: [{ model: Inverter, as: 'inverter', attributes: ['tag'] }] }],
+    }),
+    timeline(id),
+    wo.priority === 'P1' ? null : prioritySuggestion(id),
+  ]);
   const stringsDto = strings
     .map((ws) => {
       const s = (ws as WorkOrderString & { string: PvString }).string;
@@ -332,8 +343,8 @@ export async function getWorkOrder(user: SessionUser, id: number): Promise<WorkO
     returnReason: wo.returnReason ?? null,
     cancelReason: wo.cancelReason ?? null,
     strings: stringsDto,
-    events: await listEvents(user, id),
-    prioritySuggestion: wo.priority === 'P1' ? null : await prioritySuggestion(id),
+    events,
+    prioritySuggestion: suggestion,
     allowedTransitions: allowedTransitions(user, wo),
   };
 }
