@@ -1,9 +1,14 @@
 #!/usr/bin/env node
-// npm run db:backup [-- --to DIR]   : mariadb-dump of DB_NAME (one consistent snapshot) + the uploads folder
+// npm run db:backup [-- --to DIR]   : mariadb-dump of DB_NAME (one consistent snapshot) + the uploads folder,
+//                                     with a manifest of SHA-256 digests of every file
 // npm run db:restore -- --from DIR [--into NAME] : load a backup into DB_NAME (or NAME), replacing it, and
 //                                     put the uploads back beside it (only when restoring into DB_NAME)
+// A restore checks the backup against its manifest and loads it into a staging database first; only a
+// complete load replaces the live database (one atomic RENAME TABLE) and the uploads folder. A backup that
+// is damaged or fails to load leaves the database and the uploads as they were.
 // Uses the project's own MariaDB (scripts/db.mjs) through its socket as root.
 import { spawnSync } from 'node:child_process';
+import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { dataDir, fail, log, which } from './lib.mjs';
@@ -20,37 +25,134 @@ const safeName = (n) => {
   return n;
 };
 
+function sha256(file) {
+  const hash = crypto.createHash('sha256');
+  const fd = fs.openSync(file, 'r');
+  const buf = Buffer.alloc(1 << 20);
+  for (let n; (n = fs.readSync(fd, buf, 0, buf.length, null)) > 0; ) hash.update(buf.subarray(0, n));
+  fs.closeSync(fd);
+  return hash.digest('hex');
+}
+
+/** Every file under `dir`, as paths relative to it, in a stable order. */
+function filesUnder(dir) {
+  if (!fs.existsSync(dir)) return [];
+  return fs
+    .readdirSync(dir, { recursive: true, withFileTypes: true })
+    .filter((e) => e.isFile())
+    .map((e) => path.relative(dir, path.join(e.parentPath ?? e.path, e.name)))
+    .sort();
+}
+
 function backup() {
   const stamp = new Date().toISOString().replace(/[:.]/g, '-');
   const dir = path.resolve(arg('--to') ?? path.join(dataDir, 'backups', stamp));
   fs.mkdirSync(dir, { recursive: true });
   const dump = which('mariadb-dump') ?? fail('mariadb-dump is missing (Debian package mariadb-client).');
-  const out = fs.openSync(path.join(dir, 'database.sql'), 'w');
+  const sqlFile = path.join(dir, 'database.sql');
+  const out = fs.openSync(sqlFile, 'w');
   const r = spawnSync(dump, ['--no-defaults', `--socket=${socket}`, '-uroot', '--single-transaction', '--routines', '--triggers', '--hex-blob', safeName(dbName)], { stdio: ['ignore', out, 'pipe'] });
   fs.closeSync(out);
   if (r.status !== 0) fail(`mariadb-dump failed: ${r.stderr}`);
-  if (fs.existsSync(uploads)) fs.cpSync(uploads, path.join(dir, 'uploads'), { recursive: true });
-  fs.writeFileSync(path.join(dir, 'manifest.json'), JSON.stringify({ database: dbName, createdAt: new Date().toISOString(), uploads: fs.existsSync(uploads) }, null, 2));
-  log(`Backup of ${dbName} written to ${dir}`);
+  const withUploads = fs.existsSync(uploads);
+  if (withUploads) fs.cpSync(uploads, path.join(dir, 'uploads'), { recursive: true });
+  const files = { 'database.sql': sha256(sqlFile) };
+  for (const f of filesUnder(path.join(dir, 'uploads'))) files[path.join('uploads', f)] = sha256(path.join(dir, 'uploads', f));
+  fs.writeFileSync(
+    path.join(dir, 'manifest.json'),
+    `${JSON.stringify({ database: dbName, createdAt: new Date().toISOString(), uploads: withUploads, sha256: files }, null, 2)}\n`,
+  );
+  log(`Backup of ${dbName} written to ${dir} (${Object.keys(files).length} files)`);
   process.stdout.write(`${dir}\n`);
+}
+
+/** Fails, before anything is changed, when a file of the backup is missing, extra or not what was written. */
+function verify(dir) {
+  const manifestFile = path.join(dir, 'manifest.json');
+  if (!fs.existsSync(manifestFile)) fail(`${manifestFile} does not exist: not a backup folder. Nothing was restored.`);
+  let manifest;
+  try {
+    manifest = JSON.parse(fs.readFileSync(manifestFile, 'utf8'));
+  } catch {
+    fail(`${manifestFile} is not valid JSON. Nothing was restored.`);
+  }
+  // Backups written before digests were recorded: only the dump's presence can be checked.
+  if (!manifest.sha256) return manifest;
+  const listed = Object.keys(manifest.sha256).sort();
+  const present = ['database.sql', ...filesUnder(path.join(dir, 'uploads')).map((f) => path.join('uploads', f))].filter((f) =>
+    fs.existsSync(path.join(dir, f)),
+  );
+  const missing = listed.filter((f) => !present.includes(f));
+  const extra = present.filter((f) => !listed.includes(f));
+  const changed = listed.filter((f) => present.includes(f) && sha256(path.join(dir, f)) !== manifest.sha256[f]);
+  if (missing.length || extra.length || changed.length) {
+    const say = (what, list) => (list.length ? `${what}: ${list.slice(0, 5).join(', ')}${list.length > 5 ? ` and ${list.length - 5} more` : ''}` : null);
+    fail(
+      `The backup in ${dir} does not match its manifest (${[say('missing', missing), say('not listed', extra), say('changed', changed)].filter(Boolean).join('; ')}). Nothing was restored.`,
+    );
+  }
+  return manifest;
 }
 
 function restore() {
   const dir = path.resolve(arg('--from') ?? fail('Say which backup: npm run db:restore -- --from .data/backups/<folder>'));
   const sqlFile = path.join(dir, 'database.sql');
-  if (!fs.existsSync(sqlFile)) fail(`${sqlFile} does not exist.`);
+  if (!fs.existsSync(sqlFile)) fail(`${sqlFile} does not exist. Nothing was restored.`);
+  verify(dir);
   const target = safeName(arg('--into') ?? dbName);
+  const staging = `${target}__restoring`;
+  const replaced = `${target}__replaced`;
   const client = which('mariadb') ?? fail('The mariadb client is missing (Debian package mariadb-client).');
   const base = ['--no-defaults', `--socket=${socket}`, '-uroot'];
-  const reset = spawnSync(client, [...base, '-e', `DROP DATABASE IF EXISTS \`${target}\`; CREATE DATABASE \`${target}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`], { encoding: 'utf8' });
-  if (reset.status !== 0) fail(`Could not recreate ${target}: ${reset.stderr}`);
+  const sql = (statements) => spawnSync(client, [...base, '-N', '-B', '-e', statements], { encoding: 'utf8' });
+  const created = (db) => `CREATE DATABASE \`${db}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`;
+
+  // 1. Load into a staging database; the live one is not touched yet.
+  const prepared = sql(`DROP DATABASE IF EXISTS \`${staging}\`; ${created(staging)}`);
+  if (prepared.status !== 0) fail(`Could not create the staging database ${staging}: ${prepared.stderr}`);
   const input = fs.openSync(sqlFile, 'r');
-  const r = spawnSync(client, [...base, target], { stdio: [input, 'inherit', 'pipe'] });
+  const loaded = spawnSync(client, [...base, staging], { stdio: [input, 'inherit', 'pipe'] });
   fs.closeSync(input);
-  if (r.status !== 0) fail(`Loading the backup failed: ${r.stderr}`);
-  if (target === dbName && fs.existsSync(path.join(dir, 'uploads'))) {
-    fs.rmSync(uploads, { recursive: true, force: true });
-    fs.cpSync(path.join(dir, 'uploads'), uploads, { recursive: true });
+  if (loaded.status !== 0) {
+    sql(`DROP DATABASE IF EXISTS \`${staging}\``);
+    fail(`Loading the backup failed: ${String(loaded.stderr).trim()}. ${target} is unchanged.`);
+  }
+
+  // 2. The uploads beside it, copied next to the live folder (same file system, so the swap is a rename).
+  const withUploads = target === dbName && fs.existsSync(path.join(dir, 'uploads'));
+  const stagedUploads = `${uploads}.restoring`;
+  if (withUploads) {
+    fs.rmSync(stagedUploads, { recursive: true, force: true });
+    fs.cpSync(path.join(dir, 'uploads'), stagedUploads, { recursive: true });
+  }
+
+  // 3. Swap: every table of the live database moves aside and every staged one takes its place, in one
+  //    RENAME TABLE (atomic in MariaDB); then what was replaced is dropped.
+  const tablesOf = (db) => {
+    const r = sql(`SELECT table_name FROM information_schema.tables WHERE table_schema = '${db}' ORDER BY table_name`);
+    if (r.status !== 0) fail(`Could not list the tables of ${db}: ${r.stderr}`);
+    return r.stdout.split('\n').filter(Boolean);
+  };
+  const swap = sql(`CREATE DATABASE IF NOT EXISTS \`${target}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
+    DROP DATABASE IF EXISTS \`${replaced}\`; ${created(replaced)}`);
+  if (swap.status !== 0) fail(`Could not prepare the swap: ${swap.stderr}. ${target} is unchanged.`);
+  const moves = [
+    ...tablesOf(target).map((t) => `\`${target}\`.\`${t}\` TO \`${replaced}\`.\`${t}\``),
+    ...tablesOf(staging).map((t) => `\`${staging}\`.\`${t}\` TO \`${target}\`.\`${t}\``),
+  ];
+  const renamed = sql(`SET SESSION foreign_key_checks = 0; RENAME TABLE ${moves.join(', ')};`);
+  if (renamed.status !== 0) {
+    sql(`DROP DATABASE IF EXISTS \`${staging}\`; DROP DATABASE IF EXISTS \`${replaced}\``);
+    if (withUploads) fs.rmSync(stagedUploads, { recursive: true, force: true });
+    fail(`Could not swap the restored tables in: ${renamed.stderr}. ${target} is unchanged.`);
+  }
+  sql(`DROP DATABASE IF EXISTS \`${replaced}\`; DROP DATABASE IF EXISTS \`${staging}\``);
+  if (withUploads) {
+    const old = `${uploads}.replaced`;
+    fs.rmSync(old, { recursive: true, force: true });
+    if (fs.existsSync(uploads)) fs.renameSync(uploads, old);
+    fs.renameSync(stagedUploads, uploads);
+    fs.rmSync(old, { recursive: true, force: true });
   }
   log(`Restored ${dir} into ${target}.`);
 }
