@@ -1,6 +1,7 @@
 #!/usr/bin/env node
-// npm run db:backup [-- --to DIR]   : mariadb-dump of DB_NAME (one consistent snapshot) + the uploads folder,
-//                                     with a manifest of SHA-256 digests of every file
+// npm run db:backup [-- --to DIR]   : mariadb-dump of DB_NAME (one consistent snapshot) + the uploads folder
+//                                     (or, with S3_* set, every object of the bucket), with a manifest of
+//                                     SHA-256 digests of every file
 // npm run db:restore -- --from DIR [--into NAME] : load a backup into DB_NAME (or NAME), replacing it, and
 //                                     put the uploads back beside it (only when restoring into DB_NAME)
 // A restore checks the backup against its manifest and loads it into a staging database first; only a
@@ -11,7 +12,7 @@ import { spawnSync } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
-import { dataDir, fail, log, which } from './lib.mjs';
+import { dataDir, fail, log, root, tsxBin, which } from './lib.mjs';
 
 const socket = path.join(dataDir, 'run/mariadb.sock');
 const dbName = process.env.DB_NAME ?? 'stringfield';
@@ -19,6 +20,15 @@ const uploads = process.env.UPLOADS_DIR ?? path.join(dataDir, 'uploads');
 const arg = (name) => {
   const i = process.argv.indexOf(name);
   return i >= 0 ? process.argv[i + 1] : undefined;
+};
+// Uploads in an S3-compatible bucket: the bucket is copied object by object (apps/api/src/cli/bucket-copy.ts).
+const inBucket = Boolean(process.env.S3_BUCKET);
+const bucketCopy = (cmd, dir) => {
+  const r = spawnSync(tsxBin, ['apps/api/src/cli/bucket-copy.ts', cmd, path.join(dir, 'objects'), path.join(dir, 'objects.json')], {
+    cwd: root,
+    encoding: 'utf8',
+  });
+  return r.status === 0 ? { count: Number(r.stdout.trim()) } : { error: (r.stderr || r.stdout).trim().split('\n').at(-1) };
 };
 const safeName = (n) => {
   if (!/^[a-z0-9_]+$/.test(n)) fail(`Database name "${n}": lower-case letters, digits and _ only.`);
@@ -44,6 +54,15 @@ function filesUnder(dir) {
     .sort();
 }
 
+/** The files of a backup besides database.sql and the manifest: uploads, or bucket objects and their index. */
+function contentsOf(dir) {
+  return [
+    ...filesUnder(path.join(dir, 'uploads')).map((f) => path.join('uploads', f)),
+    ...filesUnder(path.join(dir, 'objects')).map((f) => path.join('objects', f)),
+    ...(fs.existsSync(path.join(dir, 'objects.json')) ? ['objects.json'] : []),
+  ];
+}
+
 function backup() {
   const stamp = new Date().toISOString().replace(/[:.]/g, '-');
   const dir = path.resolve(arg('--to') ?? path.join(dataDir, 'backups', stamp));
@@ -54,13 +73,19 @@ function backup() {
   const r = spawnSync(dump, ['--no-defaults', `--socket=${socket}`, '-uroot', '--single-transaction', '--routines', '--triggers', '--hex-blob', safeName(dbName)], { stdio: ['ignore', out, 'pipe'] });
   fs.closeSync(out);
   if (r.status !== 0) fail(`mariadb-dump failed: ${r.stderr}`);
-  const withUploads = fs.existsSync(uploads);
+  const withUploads = !inBucket && fs.existsSync(uploads);
   if (withUploads) fs.cpSync(uploads, path.join(dir, 'uploads'), { recursive: true });
+  let objects = null;
+  if (inBucket) {
+    const copied = bucketCopy('export', dir);
+    if (copied.error) fail(`Copying the bucket ${process.env.S3_BUCKET} failed: ${copied.error}`);
+    objects = copied.count;
+  }
   const files = { 'database.sql': sha256(sqlFile) };
-  for (const f of filesUnder(path.join(dir, 'uploads'))) files[path.join('uploads', f)] = sha256(path.join(dir, 'uploads', f));
+  for (const f of contentsOf(dir)) files[f] = sha256(path.join(dir, f));
   fs.writeFileSync(
     path.join(dir, 'manifest.json'),
-    `${JSON.stringify({ database: dbName, createdAt: new Date().toISOString(), uploads: withUploads, sha256: files }, null, 2)}\n`,
+    `${JSON.stringify({ database: dbName, createdAt: new Date().toISOString(), uploads: withUploads, objects, sha256: files }, null, 2)}\n`,
   );
   log(`Backup of ${dbName} written to ${dir} (${Object.keys(files).length} files)`);
   process.stdout.write(`${dir}\n`);
@@ -79,9 +104,7 @@ function verify(dir) {
   // Backups written before digests were recorded: only the dump's presence can be checked.
   if (!manifest.sha256) return manifest;
   const listed = Object.keys(manifest.sha256).sort();
-  const present = ['database.sql', ...filesUnder(path.join(dir, 'uploads')).map((f) => path.join('uploads', f))].filter((f) =>
-    fs.existsSync(path.join(dir, f)),
-  );
+  const present = ['database.sql', ...contentsOf(dir)].filter((f) => fs.existsSync(path.join(dir, f)));
   const missing = listed.filter((f) => !present.includes(f));
   const extra = present.filter((f) => !listed.includes(f));
   const changed = listed.filter((f) => present.includes(f) && sha256(path.join(dir, f)) !== manifest.sha256[f]);
@@ -98,7 +121,7 @@ function restore() {
   const dir = path.resolve(arg('--from') ?? fail('Say which backup: npm run db:restore -- --from .data/backups/<folder>'));
   const sqlFile = path.join(dir, 'database.sql');
   if (!fs.existsSync(sqlFile)) fail(`${sqlFile} does not exist. Nothing was restored.`);
-  verify(dir);
+  const manifest = verify(dir);
   const target = safeName(arg('--into') ?? dbName);
   const staging = `${target}__restoring`;
   const replaced = `${target}__replaced`;
@@ -118,7 +141,21 @@ function restore() {
     fail(`Loading the backup failed: ${String(loaded.stderr).trim()}. ${target} is unchanged.`);
   }
 
-  // 2. The uploads beside it, copied next to the live folder (same file system, so the swap is a rename).
+  // 2. The files beside it. Bucket objects go back into the bucket (they are named by the rows that use
+  //    them, so putting them back before the swap only adds or rewrites the same objects); uploads are
+  //    copied next to the live folder (same file system, so their swap is a rename).
+  if (target === dbName && manifest.objects !== undefined && manifest.objects !== null) {
+    const dropStaging = () => sql(`DROP DATABASE IF EXISTS \`${staging}\``);
+    if (!inBucket) {
+      dropStaging();
+      fail(`This backup holds ${manifest.objects} objects of an S3 bucket: set S3_* to the bucket to restore them into. ${target} is unchanged.`);
+    }
+    const copied = bucketCopy('import', dir);
+    if (copied.error) {
+      dropStaging();
+      fail(`Putting the objects back into ${process.env.S3_BUCKET} failed: ${copied.error}. ${target} is unchanged.`);
+    }
+  }
   const withUploads = target === dbName && fs.existsSync(path.join(dir, 'uploads'));
   const stagedUploads = `${uploads}.restoring`;
   if (withUploads) {

@@ -1,16 +1,20 @@
+import { spawn } from 'node:child_process';
 import fs from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import sharp from 'sharp';
 import S3rver from 's3rver';
-import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
+import { DeleteObjectCommand, GetObjectCommand, ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import { ConnectionError } from 'sequelize';
 import type * as Helpers from './helpers.ts';
 import type { Agent } from './helpers.ts';
 import type * as Models from '../../apps/api/src/models/index.ts';
 import type { FileStorage } from '../../apps/api/src/lib/storage.ts';
 import { apiTestEnv } from './test-env.ts';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
 // Uploads against s3rver, a local S3 fake on a random loopback port with a temporary directory.
 // config/env.ts reads the environment once, when first imported; so the app and its helpers are imported
@@ -280,6 +284,52 @@ describe('photo uploads to S3-compatible storage', () => {
     expect(await keysInBucket()).toEqual(keysBefore);
     expect(await models.Photo.count()).toBe(rows);
   });
+
+  it('backs up every object of the bucket with the database, and a restore puts them back', async () => {
+    const backupDir = await fs.mkdtemp(path.join(os.tmpdir(), 'sf-backup-s3-'));
+    const live = `${apiTestEnv.DB_NAME}_s3_restore`;
+    // Asynchronous: s3rver answers from this very process, so a synchronous child would wait for it forever.
+    const backupScript = (args: string[], dbName: string) =>
+      new Promise<{ status: number | null; stderr: string }>((resolve) => {
+        const child = spawn(process.execPath, ['scripts/backup.mjs', ...args], {
+          cwd: root,
+          env: { ...process.env, DB_NAME: dbName, UPLOADS_DIR: apiTestEnv.UPLOADS_DIR },
+          stdio: ['ignore', 'ignore', 'pipe'],
+        });
+        let stderr = '';
+        child.stderr.on('data', (c: Buffer) => (stderr += c.toString()));
+        child.on('close', (status) => resolve({ status, stderr }));
+      });
+    const bytesOf = async (key: string) =>
+      Buffer.from(await (await bucket.send(new GetObjectCommand({ Bucket: BUCKET, Key: key }))).Body!.transformToByteArray());
+    try {
+      const keys = await keysInBucket();
+      expect(keys.length).toBeGreaterThanOrEqual(3);
+      const before = new Map(await Promise.all(keys.map(async (k) => [k, await bytesOf(k)] as const)));
+      const made = await backupScript(['backup', '--to', backupDir], apiTestEnv.DB_NAME);
+      expect(made.status, made.stderr).toBe(0);
+      const manifest = JSON.parse(await fs.readFile(path.join(backupDir, 'manifest.json'), 'utf8')) as {
+        objects: number;
+        uploads: boolean;
+        sha256: Record<string, string>;
+      };
+      expect(manifest).toMatchObject({ objects: keys.length, uploads: false });
+      expect(Object.keys(manifest.sha256).filter((f) => f.startsWith('objects/')).sort()).toEqual(keys.map((k) => `objects/${k}`));
+
+      // The bucket loses its objects; restoring the backup as the live database puts them back.
+      for (const Key of keys) await bucket.send(new DeleteObjectCommand({ Bucket: BUCKET, Key }));
+      expect(await keysInBucket()).toEqual([]);
+      const restored = await backupScript(['restore', '--from', backupDir], live);
+      expect(restored.status, restored.stderr).toBe(0);
+      expect(await keysInBucket()).toEqual(keys);
+      for (const k of keys) expect((await bytesOf(k)).equals(before.get(k)!)).toBe(true);
+      const [photos] = await models.sequelize.query(`SELECT COUNT(*) AS n FROM \`${live}\`.photos`);
+      expect(Number((photos as Array<{ n: number }>)[0]!.n)).toBe(await models.Photo.count());
+    } finally {
+      await models.sequelize.query(`DROP DATABASE IF EXISTS \`${live}\``);
+      await fs.rm(backupDir, { recursive: true, force: true });
+    }
+  }, 120_000);
 
   it('answers 503 with a clear message when the bucket does not answer, and records nothing', async () => {
     const rows = await models.Photo.count();
