@@ -90,9 +90,7 @@ function urlOf(r: RouteEntry): string {
 
 // Routes that succeed with an empty request and end the caller's sessions.
 const endsSession = ['post /api/auth/sign-out-everywhere'];
-// Demo tickets are signed off without an evidence snapshot, so there is nothing to verify.
-const noDemoRecord = ['/api/work-orders/:id/sign-off/verify'];
-const existing = (r: RouteEntry) => !urlOf(r).includes(String(missing)) && !noDemoRecord.includes(r.path);
+const existing = (r: RouteEntry) => !urlOf(r).includes(String(missing));
 /** A read of one Fair Wind Meadow record, or of a list narrowed to one (?siteId=, ?stringId=). */
 const readsFwm = (r: RouteEntry) =>
   r.method === 'get' && (r.path.includes(':id') || /[?&](siteId|stringId)=/.test(urlOf(r))) && existing(r);

@@ -1,3 +1,4 @@
+import fs from 'node:fs/promises';
 import supertest from 'supertest';
 import type { Express } from 'express';
 import { expect } from 'vitest';
@@ -62,6 +63,8 @@ export async function resetDatabase({ plant = false } = {}): Promise<void> {
     await sequelize.query(`TRUNCATE TABLE \`${table}\``);
   }
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 1');
+  // With the photos table empty, so is the folder of their files: each demo seed writes its photos anew.
+  await fs.rm(apiTestEnv.UPLOADS_DIR, { recursive: true, force: true });
   await seedDemo({ plant });
 }
 

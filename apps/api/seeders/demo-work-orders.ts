@@ -7,6 +7,7 @@ import { reserveNumbers } from '../src/services/work-orders.service.ts';
 import { REPEAT_BACKFILL_SQL } from '../src/lib/repeat-faults.ts';
 import { DemoCheckBook, noise, readingValues, scheduleBefore, scheduleFrom, type Fault, type Reading, type TimedReading } from './demo-readings.ts';
 import { clearSkyPoaWm2, moduleTempC } from './demo-sky.ts';
+import { seedPhotos, seedSignOffs, type ThermalSurvey } from './demo-evidence.ts';
 
 type Step = { to: WorkOrderStatus; by: string; hoursAfterReport: number; reason?: string };
 type DemoTicket = {
@@ -24,6 +25,11 @@ type DemoTicket = {
   readings?: TimedReading[];
   /** A bypass-diode replacement between the before and the after reading (module and diode position). */
   diode?: { modulePosition: number; diodePosition: number };
+  /** A thermal image attached when the ticket was raised, with the reading its thermographer noted. */
+  thermal?: ThermalSurvey;
+  /** Why the supervisor signed off over a string whose after check is not "pass" (by string label). */
+  overrideReasons?: Record<string, string>;
+  signOffComment?: string;
 };
 
 const D = 'dispatcher@stringfield.test';
@@ -63,7 +69,7 @@ const before = (label: string, fault: Fault, notes = ''): Reading => ({ label, p
 const after = (label: string, gapMin?: number, notes = ''): Reading => ({ label, phase: 'after', fault: { kind: 'healthy' }, notes, ...(gapMin ? { gapMin } : {}) });
 
 /** Voc and Isc of every string of the given inverters, input by input, as an inspection walks them. */
-function inspectionRound(inverters: number[], odd: Record<string, [Fault, string]>): Reading[] {
+function inspectionRound(inverters: number[], odd: Record<string, [Fault, string, string?]>): Reading[] {
   const out: Reading[] = [];
   for (const inv of inverters) {
     for (let input = 1; input <= 6; input += 1) {
@@ -91,21 +97,22 @@ const subMinutesDate = (d: Date, minutes: number) => addMinutes(d, -minutes);
 const volts = (v: number) => `${v < 0 ? '−' : ''}${Math.round(Math.abs(v)).toLocaleString('en-GB')} V`;
 
 function demoTickets(now: Date, modules: Map<string, ModuleModel>): DemoTicket[] {
-  const fwmRound = (inverters: number[], odd: Record<string, [Fault, string]>) => ({ site: 'FWM', readings: inspectionRound(inverters, odd), minWm2: 250 });
+  const fwmRound = (inverters: number[], odd: Record<string, [Fault, string, string?]>) => ({ site: 'FWM', readings: inspectionRound(inverters, odd), minWm2: 250 });
+  const reasonsOf = (odd: Record<string, [Fault, string, string?]>) => Object.fromEntries(Object.entries(odd).flatMap(([label, [, , reason]]) => (reason ? [[label, reason]] : [])));
 
   // A routine inspection of INV11–INV12 a week before the storm that later killed a string there.
-  const recentRound = scheduleBefore(
-    fwmRound([11, 12], {
-      'INV11-MPPT4-S4': [{ kind: 'cloud' }, 'Cloud over the reference cell during the Isc test.'],
-      'INV12-MPPT1-S3': [{ kind: 'no_temp' }, 'Temperature probe came off; Voc to be re-checked at the next visit.'],
-    }),
-    subDays(now, 9),
-    null,
-  )!;
+  const recentOdd: Record<string, [Fault, string, string]> = {
+    'INV11-MPPT4-S4': [{ kind: 'cloud' }, 'Cloud over the reference cell during the Isc test.', 'Isc read under a passing cloud; Voc matches its neighbours. Isc to be re-read at the next inspection.'],
+    'INV12-MPPT1-S3': [{ kind: 'no_temp' }, 'Temperature probe came off; Voc to be re-checked at the next visit.', 'No module temperature, so Voc cannot be judged; Isc is in line with its neighbours. Voc re-check booked for the next visit.'],
+  };
+  const recentRound = scheduleBefore(fwmRound([11, 12], recentOdd), subDays(now, 9), null)!;
   const recentReportedAt = subDays(recentRound[0]!.at, 3);
   const recentSubmitted = addMinutes(recentRound.at(-1)!.at, 30);
   const recentSignedOffAt = addHours(recentSubmitted, 20);
-  const olderRound = scheduleFrom(fwmRound([1, 2], { 'INV02-MPPT6-S4': [{ kind: 'cloud' }, 'Cloud during the Isc test; Voc fine.'] }), subDays(now, 41));
+  const olderOdd: Record<string, [Fault, string, string]> = {
+    'INV02-MPPT6-S4': [{ kind: 'cloud' }, 'Cloud during the Isc test; Voc fine.', 'Isc read under a passing cloud; Voc is fine and the string produces like its neighbours on the monitoring.'],
+  };
+  const olderRound = scheduleFrom(fwmRound([1, 2], olderOdd), subDays(now, 41));
   const olderReportedAt = subDays(olderRound[0]!.at, 6);
 
   const inspections: DemoTicket[] = [
@@ -113,12 +120,14 @@ function demoTickets(now: Date, modules: Map<string, ModuleModel>): DemoTicket[]
       site: 'FWM', strings: recentRound.map((r) => [r.label, 'Annual string inspection']), faultCategory: 'other', priority: 'P4',
       title: 'Annual string inspection, INV11–INV12', description: 'Voc and Isc of every string on INV11 and INV12, with irradiance and module temperature.',
       source: 'inspection', reportedAt: recentReportedAt, assignee: 'rosa.quill@stringfield.test', readings: recentRound,
+      overrideReasons: reasonsOf(recentOdd), signOffComment: 'Inspection complete; two readings to repeat at the next visit (see the overrides).',
       steps: lifecycle('rosa.quill@stringfield.test', 'signed_off', { times: timesOf(recentReportedAt, recentRound), signedOff: hoursBetween(recentReportedAt, recentSignedOffAt) }),
     },
     {
       site: 'FWM', strings: olderRound.map((r) => [r.label, 'Annual string inspection']), faultCategory: 'other', priority: 'P4',
       title: 'Annual string inspection, INV01–INV02', description: 'Voc and Isc of every string on INV01 and INV02, with irradiance and module temperature.',
       source: 'inspection', reportedAt: olderReportedAt, assignee: 'tomas.brenn@stringfield.test', readings: olderRound,
+      overrideReasons: reasonsOf(olderOdd), signOffComment: 'Inspection complete; one Isc to repeat at the next visit.',
       steps: lifecycle('tomas.brenn@stringfield.test', 'signed_off', { times: timesOf(olderReportedAt, olderRound) }),
     },
   ];
@@ -145,6 +154,13 @@ function demoTickets(now: Date, modules: Map<string, ModuleModel>): DemoTicket[]
   const osrModule = modules.get('SDM-405-72M')!;
   const polarityG = clearSkyPoaWm2('OSR', polarityAt);
   const polarityVocV = -expectedString({ module: osrModule.toSpec(), modulesInSeries: 25, irradianceWm2: polarityG, moduleTempC: moduleTempC('OSR', polarityAt, polarityG, osrModule.noctC ?? 45) }).vocV;
+
+  // The thermal survey flew in the morning's good light; the ticket was raised from its report.
+  const thermalReportedAt = subHours(now, 8);
+  // A thermal survey wants 600 W/m² or more (IEC TS 62446-3, from memory); in winter the best light there is.
+  const thermalAt = [600, 400, 250]
+    .map((minWm2) => scheduleBefore({ site: 'CBD', minWm2, readings: [before('INV09-MPPT1-S2', { kind: 'healthy' })] }, subMinutesDate(thermalReportedAt, 40), null))
+    .find((v) => v !== null)![0]!.at;
 
   const soilingReportedAt = subDays(now, 3);
   const soiled: Array<[string, number]> = [['INV04-MPPT1-S1', -12], ['INV04-MPPT1-S2', -12], ['INV04-MPPT2-S1', -11], ['INV04-MPPT2-S2', -12]];
@@ -193,7 +209,8 @@ function demoTickets(now: Date, modules: Map<string, ModuleModel>): DemoTicket[]
     {
       site: 'CBD', strings: [['INV09-MPPT1-S2', 'Junction box 28 K above its neighbours in the thermal survey']], faultCategory: 'hot_spot', priority: 'P2',
       title: 'Hot junction box on INV09-MPPT1-S2', description: 'Thermal survey: junction box of module 7 at 71 °C, neighbours 43 °C, 820 W/m².',
-      source: 'inspection', reportedAt: subHours(now, 8), steps: [],
+      source: 'inspection', reportedAt: thermalReportedAt, steps: [],
+      thermal: { by: 'ada.merrow@stringfield.test', at: thermalAt, modulePosition: 7, hottestC: 71, referenceC: 43, irradianceWm2: 820 },
     },
   ];
   const categories: FaultCategory[] = ['fuse', 'connector_cable_damage', 'bypass_diode_failure', 'shading_soiling', 'open_circuit', 'low_current'];
@@ -237,6 +254,8 @@ export async function seedDemoWorkOrders(transaction: Transaction): Promise<numb
   const tickets = demoTickets(now, new Map(moduleRows.map((m) => [m.model, m]))).sort((a, b) => a.reportedAt.getTime() - b.reportedAt.getTime());
   const qi = sequelize.getQueryInterface();
   const fieldWork: Array<{ wo: WorkOrder; t: DemoTicket; strings: Map<string, PvString> }> = [];
+  // Signed-off history goes through the sign-off service once its evidence is in: seeded awaiting sign-off.
+  const toSignOff: Array<{ wo: WorkOrder; t: DemoTicket; step: Step; strings: PvString[] }> = [];
   for (const t of tickets) {
     const site = sites.get(t.site);
     if (!site) continue;
@@ -244,9 +263,11 @@ export async function seedDemoWorkOrders(transaction: Transaction): Promise<numb
     if (strings.length !== t.strings.length) continue;
     const [number] = await reserveNumbers(t.reportedAt.getUTCFullYear(), 1, transaction);
     const at = (h: number) => addHours(t.reportedAt, h);
-    const last = t.steps.at(-1);
-    const status: WorkOrderStatus = last?.to ?? 'reported';
-    const stamp = (s: WorkOrderStatus) => t.steps.filter((x) => x.to === s).at(-1);
+    const finalStatus: WorkOrderStatus = t.steps.at(-1)?.to ?? 'reported';
+    const signOffStep = finalStatus === 'signed_off' ? t.steps.at(-1)! : null;
+    const steps = signOffStep ? t.steps.slice(0, -1) : t.steps;
+    const status: WorkOrderStatus = steps.at(-1)?.to ?? 'reported';
+    const stamp = (s: WorkOrderStatus) => steps.filter((x) => x.to === s).at(-1);
     const wo = await WorkOrder.create(
       {
         number: number!,
@@ -263,11 +284,11 @@ export async function seedDemoWorkOrders(transaction: Transaction): Promise<numb
         createdById: users.get(D)!.id,
         dispatchedAt: stamp('dispatched') ? at(stamp('dispatched')!.hoursAfterReport) : null,
         submittedAt: stamp('awaiting_signoff') ? at(stamp('awaiting_signoff')!.hoursAfterReport) : null,
-        signedOffAt: stamp('signed_off') ? at(stamp('signed_off')!.hoursAfterReport) : null,
+        signedOffAt: null,
         returnReason: t.steps.find((s) => s.to === 'returned')?.reason ?? null,
         returnCount: t.steps.filter((s) => s.to === 'returned').length,
         // Historical tickets were overdue long ago; they need no overdue mail now.
-        overdueNotifiedAt: status === 'signed_off' ? at(1) : null,
+        overdueNotifiedAt: finalStatus === 'signed_off' ? at(1) : null,
       },
       { transaction },
     );
@@ -279,7 +300,7 @@ export async function seedDemoWorkOrders(transaction: Transaction): Promise<numb
     let from: WorkOrderStatus = 'reported';
     const events = [
       { work_order_id: wo.id, actor_id: users.get(D)!.id, type: 'created', from_status: null, to_status: 'reported', changes: null, comment: null, created_at: t.reportedAt },
-      ...t.steps.map((s) => {
+      ...steps.map((s) => {
         const e = {
           work_order_id: wo.id,
           actor_id: users.get(s.by)!.id,
@@ -295,9 +316,39 @@ export async function seedDemoWorkOrders(transaction: Transaction): Promise<numb
       }),
     ];
     await qi.bulkInsert('work_order_events', events, { transaction });
-    if (t.readings?.length) fieldWork.push({ wo, t, strings: new Map(strings.map((s) => [s.label, s])) });
+    if (t.readings?.length || t.thermal) fieldWork.push({ wo, t, strings: new Map(strings.map((s) => [s.label, s])) });
+    if (signOffStep) toSignOff.push({ wo, t, step: signOffStep, strings });
   }
-  await seedReadings(fieldWork, users, new Map(moduleRows.map((m) => [m.id, m])), transaction);
+  const sitesById = new Map([...sites.values()].map((s) => [s.id, s]));
+  const checks = await seedReadings(fieldWork.filter(({ t }) => t.readings?.length), users, new Map(moduleRows.map((m) => [m.id, m])), transaction);
+  const photos = await seedPhotos(
+    fieldWork.map(({ wo, t, strings }) => ({
+      wo,
+      site: t.site,
+      timeZone: sitesById.get(wo.siteId)!.timeZone,
+      reportedAt: t.reportedAt,
+      strings,
+      checks: checks.filter((c) => c.workOrderId === wo.id),
+      finalStatus: t.steps.at(-1)?.to ?? 'reported',
+      technicianId: t.assignee ? users.get(t.assignee)!.id : null,
+      ...(t.diode ? { diode: { label: t.strings[0]![0], ...t.diode, at: diodeTime(t) } } : {}),
+      ...(t.thermal ? { thermal: { ...t.thermal, uploadedById: users.get(t.thermal.by)!.id } } : {}),
+    })),
+    transaction,
+  );
+  await seedDiodeReplacements(fieldWork, checks, photos, users, transaction);
+  await seedSignOffs(
+    toSignOff.map(({ wo, t, step, strings }) => ({
+      wo,
+      supervisorId: users.get(step.by)!.id,
+      at: addHours(t.reportedAt, step.hoursAfterReport),
+      comment: t.signOffComment ?? '',
+      flagged: strings
+        .filter((s) => checks.filter((c) => c.workOrderId === wo.id && c.stringId === s.id && c.phase === 'after').at(-1)?.verdict !== 'pass')
+        .map((s) => ({ stringId: s.id, label: s.label, reason: t.overrideReasons?.[s.label] ?? null })),
+    })),
+    transaction,
+  );
   await sequelize.query(REPEAT_BACKFILL_SQL, { transaction });
   return tickets.length;
 }
@@ -307,14 +358,14 @@ const healthyIscPct: Record<string, number> = { FWM: -1, OSR: -1.5, CBD: -2.5 };
 
 /**
  * The readings of the demo tickets, judged by the field-checks computation in the order they were taken
- * (so peers are what the API would have found), then one bulk insert; and the diode replacement record.
+ * (so peers are what the API would have found), then one bulk insert.
  */
 async function seedReadings(
   fieldWork: Array<{ wo: WorkOrder; t: DemoTicket; strings: Map<string, PvString> }>,
   users: Map<string, User>,
   modules: Map<number, ModuleModel>,
   transaction: Transaction,
-): Promise<void> {
+): Promise<StringCheck[]> {
   const all = fieldWork.flatMap(({ wo, t, strings }) => t.readings!.map((r) => ({ wo, t, r, string: strings.get(r.label)! })));
   all.sort((a, b) => a.r.at.getTime() - b.r.at.getTime());
   const byId = new Map(all.map((x) => [x.string.id, x.string]));
@@ -327,14 +378,27 @@ async function seedReadings(
     row.createdAt = addMinutes(r.at, 0.1);
     row.updatedAt = row.createdAt;
   }
-  await StringCheck.bulkCreate(book.rows, { transaction });
+  return StringCheck.bulkCreate(book.rows, { transaction });
+}
 
+/** The diode change is noted ten minutes before the after reading. */
+const diodeTime = (t: DemoTicket) => addMinutes(t.readings!.at(-1)!.at, -10);
+
+/** The bypass-diode replacement records, linked to their before and after photos. */
+async function seedDiodeReplacements(
+  fieldWork: Array<{ wo: WorkOrder; t: DemoTicket; strings: Map<string, PvString> }>,
+  checks: StringCheck[],
+  photos: Awaited<ReturnType<typeof seedPhotos>>,
+  users: Map<string, User>,
+  transaction: Transaction,
+): Promise<void> {
   const diodes = fieldWork.filter(({ t }) => t.diode);
   await DiodeReplacement.bulkCreate(
     diodes.map(({ wo, t, strings }) => {
       const string = strings.get(t.strings[0]![0])!;
-      const vocOf = (phase: 'before' | 'after') => book.rows.find((c) => c.workOrderId === wo.id && c.phase === phase)?.vocV ?? null;
-      const at = addMinutes(t.readings!.at(-1)!.at, -10);
+      const vocOf = (phase: 'before' | 'after') => checks.find((c) => c.workOrderId === wo.id && c.phase === phase)?.vocV ?? null;
+      const at = diodeTime(t);
+      const linked = photos.diodePhotos.get(wo.id);
       return {
         workOrderId: wo.id,
         stringId: string.id,
@@ -348,8 +412,8 @@ async function seedReadings(
         newDiodeForwardV: 0.41,
         vocBeforeV: vocOf('before'),
         vocAfterV: vocOf('after'),
-        beforePhotoId: null,
-        afterPhotoId: null,
+        beforePhotoId: linked?.beforePhotoId ?? null,
+        afterPhotoId: linked?.afterPhotoId ?? null,
         notes: `Module ${t.diode!.modulePosition} read one substring low at its own terminals; diode ${t.diode!.diodePosition} read 0 V in diode-test mode (shorted). Replaced with the same part.`,
         technicianId: users.get(t.assignee!)!.id,
         createdAt: at,

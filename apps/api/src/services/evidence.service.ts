@@ -12,6 +12,7 @@ import {
   type SessionUser,
   type ThermalFindingInput,
 } from '@stringfield/shared';
+import type { CreationAttributes, Transaction } from 'sequelize';
 import { z } from 'zod';
 import { env } from '../config/env.ts';
 import { AppError, notFound } from '../lib/app-error.ts';
@@ -65,7 +66,7 @@ const patternMap: Record<string, ThermalPattern> = {
 
 export type UploadFile = { originalname: string; buffer: Buffer; mimetype: string };
 
-type Processed = {
+export type ProcessedImage = {
   meta: PhotoMeta;
   original: Buffer;
   originalType: string;
@@ -79,11 +80,11 @@ type Processed = {
 };
 
 /** Check, re-encode and size one uploaded image in memory; throws a 400 naming the file when it is not usable. */
-export async function processImage(file: UploadFile, meta: PhotoMeta, index: number, siteTimeZone = 'UTC'): Promise<Processed> {
+export async function processImage(file: UploadFile, meta: PhotoMeta, index: number, siteTimeZone = 'UTC'): Promise<ProcessedImage> {
   return photoJobs.run(() => processImageNow(file, meta, index, siteTimeZone));
 }
 
-async function processImageNow(file: UploadFile, meta: PhotoMeta, index: number, siteTimeZone: string): Promise<Processed> {
+async function processImageNow(file: UploadFile, meta: PhotoMeta, index: number, siteTimeZone: string): Promise<ProcessedImage> {
   const name = file.originalname || `file ${index + 1}`;
   let info: Metadata;
   try {
@@ -233,15 +234,30 @@ export async function uploadPhotos(user: SessionUser, workOrderId: number, files
   }
   // A camera without EXIF offsets records the wall-clock time where it is: the site's.
   const timeZone = (await Site.findByPk(wo.siteId, { attributes: ['id', 'timeZone'] }))?.timeZone ?? 'UTC';
-  const processed: Processed[] = [];
+  const processed: ProcessedImage[] = [];
   for (const [i, file] of files.entries()) processed.push(await processImage(file, metaList[i]!, i, timeZone));
 
+  return photoDtos(await storePhotos(wo.id, user.id, processed));
+}
+
+/**
+ * Store processed photos: three files each, then their rows in one transaction (a savepoint when the caller
+ * passes its own); a failure removes the files written, so nothing is left half done. `at` stamps the rows
+ * with an upload time other than now (the demo seed writes history).
+ */
+export async function storePhotos(
+  workOrderId: number,
+  uploadedById: number,
+  processed: ProcessedImage[],
+  options: { transaction?: Transaction; at?: Date } = {},
+): Promise<Photo[]> {
+  const { at } = options;
   const written: string[] = [];
   try {
-    const rows = await sequelize.transaction(async (transaction) => {
+    return await sequelize.transaction({ ...(options.transaction ? { transaction: options.transaction } : {}) }, async (transaction) => {
       const out: Photo[] = [];
       for (const p of processed) {
-        const stem = `photos/${wo.id}/${randomUUID()}`;
+        const stem = `photos/${workOrderId}/${randomUUID()}`;
         const keys = { original: `${stem}-original.${p.originalType.split('/')[1]}`, screen: `${stem}-screen.jpg`, thumb: `${stem}-thumb.jpg` };
         await storage.put(keys.original, p.original, p.originalType);
         written.push(keys.original);
@@ -252,7 +268,7 @@ export async function uploadPhotos(user: SessionUser, workOrderId: number, files
         out.push(
           await Photo.create(
             {
-              workOrderId: wo.id,
+              workOrderId,
               stringId: p.meta.stringId,
               modulePosition: p.meta.modulePosition,
               tag: p.meta.tag,
@@ -268,15 +284,15 @@ export async function uploadPhotos(user: SessionUser, workOrderId: number, files
               capturedAt: p.capturedAt,
               gpsLat: p.gps?.lat ?? null,
               gpsLon: p.gps?.lon ?? null,
-              uploadedById: user.id,
+              uploadedById,
+              ...(at ? { createdAt: at, updatedAt: at } : {}),
             },
-            { transaction },
+            { transaction, silent: Boolean(at) },
           ),
         );
       }
       return out;
     });
-    return photoDtos(rows);
   } catch (err) {
     await Promise.all(
       written.map((k) => storage.delete(k).catch((e: unknown) => logger.error({ err: (e as Error).message, key: k }, 'upload clean-up left a file behind'))),
@@ -311,13 +327,19 @@ export async function recordThermalFinding(user: SessionUser, photoId: number, i
   if (!p) throw notFound('That photo');
   await ticketForEvidence(user, p.workOrderId);
   if (p.tag !== 'thermal') throw new AppError('VALIDATION_FAILED', 'Thermal findings belong to photos tagged "thermal".');
+  await ThermalFinding.upsert(thermalFindingRow(photoId, input));
+  return (await photoDtos([p]))[0]!;
+}
+
+/** The stored thermal finding of a photo: the reading as given, the severity class from packages/pv. */
+export function thermalFindingRow(photoId: number, input: ThermalFindingInput): CreationAttributes<ThermalFinding> {
   const c = classifyThermalAnomaly({
     deltaTC: input.hottestC - input.referenceC,
     irradianceWm2: input.irradianceWm2,
     pattern: patternMap[input.pattern] ?? 'other',
     maxTempC: input.hottestC,
   });
-  await ThermalFinding.upsert({
+  return {
     photoId,
     hottestC: input.hottestC,
     referenceC: input.referenceC,
@@ -327,8 +349,7 @@ export async function recordThermalFinding(user: SessionUser, photoId: number, i
     classOfAbnormality: c.classOfAbnormality,
     isConditionsTooPoor: c.isConditionsTooPoor,
     reason: c.reason.slice(0, 1000),
-  });
-  return (await photoDtos([p]))[0]!;
+  };
 }
 
 /** CoA 3 thermal findings on a ticket suggest raising it to P1. */

@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import {
   workOrderStatusLabels,
   type Gate,
@@ -29,19 +29,19 @@ import { missingOf, visibleTicket } from './evidence.service.ts';
 
 type Override = { stringId: number; reason: string };
 
-async function ticketStrings(workOrderId: number) {
-  const links = await WorkOrderString.findAll({ where: { workOrderId } });
-  const strings = await PvString.findAll({ where: { id: links.map((l) => l.stringId) }, attributes: ['id', 'label'], order: [['label', 'ASC']] });
+async function ticketStrings(workOrderId: number, transaction?: Transaction) {
+  const links = await WorkOrderString.findAll({ where: { workOrderId }, transaction });
+  const strings = await PvString.findAll({ where: { id: links.map((l) => l.stringId) }, attributes: ['id', 'label'], order: [['label', 'ASC']], transaction });
   return strings;
 }
 
 /** The evidence gates of sign-off, each with what is missing; overrides only ever lift the after-check gate. */
-export async function evaluateGates(wo: WorkOrder, overrides: Override[] = []): Promise<GatesResponse> {
-  const strings = await ticketStrings(wo.id);
+export async function evaluateGates(wo: WorkOrder, overrides: Override[] = [], transaction?: Transaction): Promise<GatesResponse> {
+  const strings = await ticketStrings(wo.id, transaction);
   const [checks, photos, diodes] = await Promise.all([
-    StringCheck.findAll({ where: { workOrderId: wo.id, phase: 'after', supersededById: null }, order: [['takenAt', 'ASC']] }),
-    Photo.findAll({ where: { workOrderId: wo.id, tag: 'after' }, attributes: ['stringId'] }),
-    DiodeReplacement.findAll({ where: { workOrderId: wo.id } }),
+    StringCheck.findAll({ where: { workOrderId: wo.id, phase: 'after', supersededById: null }, order: [['takenAt', 'ASC']], transaction }),
+    Photo.findAll({ where: { workOrderId: wo.id, tag: 'after' }, attributes: ['stringId'], transaction }),
+    DiodeReplacement.findAll({ where: { workOrderId: wo.id }, transaction }),
   ]);
   const latestAfter = new Map<number, StringCheck>();
   for (const c of checks) latestAfter.set(c.stringId, c);
@@ -108,14 +108,14 @@ export async function getGates(user: SessionUser, workOrderId: number): Promise<
 }
 
 /** The canonical snapshot of a ticket's evidence that the sign-off digest covers. */
-export async function evidenceSnapshot(workOrderId: number, lastEventId?: number) {
-  const wo = (await WorkOrder.findByPk(workOrderId))!;
+export async function evidenceSnapshot(workOrderId: number, lastEventId?: number, transaction?: Transaction) {
+  const wo = (await WorkOrder.findByPk(workOrderId, { transaction }))!;
   const [strings, checks, photos, diodes, events] = await Promise.all([
-    WorkOrderString.findAll({ where: { workOrderId } }),
-    StringCheck.findAll({ where: { workOrderId }, order: [['id', 'ASC']] }),
-    Photo.findAll({ where: { workOrderId }, order: [['id', 'ASC']] }),
-    DiodeReplacement.findAll({ where: { workOrderId }, order: [['id', 'ASC']] }),
-    WorkOrderEvent.findAll({ where: { workOrderId, ...(lastEventId ? { id: { [Op.lte]: lastEventId } } : {}) }, order: [['id', 'ASC']] }),
+    WorkOrderString.findAll({ where: { workOrderId }, transaction }),
+    StringCheck.findAll({ where: { workOrderId }, order: [['id', 'ASC']], transaction }),
+    Photo.findAll({ where: { workOrderId }, order: [['id', 'ASC']], transaction }),
+    DiodeReplacement.findAll({ where: { workOrderId }, order: [['id', 'ASC']], transaction }),
+    WorkOrderEvent.findAll({ where: { workOrderId, ...(lastEventId ? { id: { [Op.lte]: lastEventId } } : {}) }, order: [['id', 'ASC']], transaction }),
   ]);
   return {
     ticket: { number: wo.number, siteId: wo.siteId, faultCategory: wo.faultCategory, priority: wo.priority, title: wo.title, reportedAt: wo.reportedAt },
@@ -141,51 +141,63 @@ export async function signOffWorkOrder(user: SessionUser, workOrderId: number, i
     throw new AppError('CONFLICT', `${wo.number} is ${workOrderStatusLabels[wo.status]}; only a ticket awaiting sign-off can be signed off.`, undefined, { status: wo.status });
   }
   if (wo.version !== input.version) throw new AppError('CONFLICT', `${wo.number} changed while you were reviewing it. Reload and check the evidence again.`, undefined, { status: wo.status });
-  const gates = await evaluateGates(wo, input.overrides);
+  const site = (await Site.findByPk(wo.siteId))!;
+  const signOff = await sequelize.transaction((transaction) => recordSignOff(wo, user.id, input, new Date(), transaction));
+  await queueMail(closeOutMail(site.ownerContactEmail, { id: wo.id, number: wo.number, title: wo.title, siteName: site.name, dueAt: wo.dueAt, priority: wo.priority }, user.name, signOff.digest));
+  return (await getSignOff(user, wo.id))!;
+}
+
+/**
+ * The sign-off of a ticket awaiting it, inside `transaction`: the gates (409 with the checklist while evidence
+ * is missing), the status change, the transition event, and the record with the digest of the evidence up
+ * to that event. The API signs off now; the demo seed signs its history off at the time the history gives.
+ */
+export async function recordSignOff(
+  wo: WorkOrder,
+  supervisorId: number,
+  input: Pick<SignOffInput, 'comment' | 'overrides'>,
+  at: Date,
+  transaction: Transaction,
+): Promise<SignOff> {
+  const gates = await evaluateGates(wo, input.overrides, transaction);
   if (!gates.ok) {
     throw new AppError('CONFLICT', 'The evidence is not complete yet; see the checklist.', undefined, { gates: gates.gates });
   }
-  const strings = await ticketStrings(wo.id);
+  const strings = await ticketStrings(wo.id, transaction);
   const labelOf = new Map(strings.map((s) => [s.id, s.label]));
   const usedOverrides = input.overrides.filter((o) => labelOf.has(o.stringId));
-  const site = (await Site.findByPk(wo.siteId))!;
-
-  const record = await sequelize.transaction(async (transaction) => {
-    const now = new Date();
-    const [affected] = await WorkOrder.update(
-      { status: 'signed_off', signedOffAt: now, version: wo.version + 1 },
-      { where: { id: wo.id, version: wo.version, status: 'awaiting_signoff' }, transaction },
-    );
-    if (affected === 0) throw new AppError('CONFLICT', `${wo.number} changed while you were reviewing it. Reload and check again.`);
-    const event = await WorkOrderEvent.create(
-      {
-        workOrderId: wo.id,
-        actorId: user.id,
-        type: 'transition',
-        fromStatus: 'awaiting_signoff',
-        toStatus: 'signed_off',
-        changes: usedOverrides.length ? JSON.stringify({ overrides: { from: null, to: usedOverrides.map((o) => labelOf.get(o.stringId)) } }) : null,
-        comment: input.comment || null,
-      },
-      { transaction },
-    );
-    return { now, eventId: event.id };
-  });
-  const snapshot = await evidenceSnapshot(wo.id, record.eventId);
-  const text = canonicalJson(snapshot);
-  const digest = sha256(text);
-  await SignOff.create({
-    workOrderId: wo.id,
-    supervisorId: user.id,
-    signedAt: record.now,
-    comment: input.comment,
-    overridesJson: JSON.stringify(usedOverrides.map((o) => ({ ...o, stringLabel: labelOf.get(o.stringId)! }))),
-    digest,
-    snapshotJson: text,
-    lastEventId: record.eventId,
-  });
-  await queueMail(closeOutMail(site.ownerContactEmail, { id: wo.id, number: wo.number, title: wo.title, siteName: site.name, dueAt: wo.dueAt, priority: wo.priority }, user.name, digest));
-  return (await getSignOff(user, wo.id))!;
+  const [affected] = await WorkOrder.update(
+    { status: 'signed_off', signedOffAt: at, version: wo.version + 1 },
+    { where: { id: wo.id, version: wo.version, status: 'awaiting_signoff' }, transaction },
+  );
+  if (affected === 0) throw new AppError('CONFLICT', `${wo.number} changed while you were reviewing it. Reload and check again.`);
+  const event = await WorkOrderEvent.create(
+    {
+      workOrderId: wo.id,
+      actorId: supervisorId,
+      type: 'transition',
+      fromStatus: 'awaiting_signoff',
+      toStatus: 'signed_off',
+      changes: usedOverrides.length ? JSON.stringify({ overrides: { from: null, to: usedOverrides.map((o) => labelOf.get(o.stringId)) } }) : null,
+      comment: input.comment || null,
+      createdAt: at,
+    },
+    { transaction },
+  );
+  const text = canonicalJson(await evidenceSnapshot(wo.id, event.id, transaction));
+  return SignOff.create(
+    {
+      workOrderId: wo.id,
+      supervisorId,
+      signedAt: at,
+      comment: input.comment,
+      overridesJson: JSON.stringify(usedOverrides.map((o) => ({ ...o, stringLabel: labelOf.get(o.stringId)! }))),
+      digest: sha256(text),
+      snapshotJson: text,
+      lastEventId: event.id,
+    },
+    { transaction },
+  );
 }
 
 export async function getSignOff(user: SessionUser, workOrderId: number): Promise<SignOffRecord | null> {
