@@ -20,6 +20,8 @@ export const e2eEnv = {
   APP_URL: `http://127.0.0.1:${port}`,
   SMTP_URL: `smtp://127.0.0.1:${mailPort}`,
   MAIL_CATCHER_DIR: path.join(root, slot ? `.data/mail-e2e-${slot}` : '.data/mail-e2e'),
+  // Photos of this run (the demo seed's included) live beside its database and go with it.
+  UPLOADS_DIR: path.join(root, slot ? `.data/uploads-e2e-${slot}` : '.data/uploads-e2e'),
   SESSION_SECRET: 'stringfield-e2e-tests-session-secret-0123456789',
 };
 Object.assign(process.env, e2eEnv);
@@ -33,6 +35,7 @@ const admin = new Sequelize('', 'stringfield', process.env.DB_PASSWORD ?? 'strin
 await admin.query(`DROP DATABASE IF EXISTS \`${e2eEnv.DB_NAME}\``);
 await admin.query(`CREATE DATABASE \`${e2eEnv.DB_NAME}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
 await admin.close();
+await fs.rm(e2eEnv.UPLOADS_DIR, { recursive: true, force: true });
 execFileSync(path.join(root, 'node_modules/.bin/tsx'), ['apps/api/src/cli/migrate.ts', 'up'], {
   cwd: root,
   env: process.env,
