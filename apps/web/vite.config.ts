@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath, URL } from 'node:url';
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
-import { defineConfig } from 'vite';
+import { defineConfig, type Plugin } from 'vite';
 import { VitePWA } from 'vite-plugin-pwa';
 
 // The API runs on 8080 in development; the browser only ever talks to its own origin, so
@@ -13,9 +13,46 @@ const apiTarget = process.env.STRINGFIELD_API_URL ?? 'http://127.0.0.1:8080';
 const tokens = readFileSync(fileURLToPath(new URL('./src/styles.css', import.meta.url)), 'utf8');
 const token = (name: string, fallback: string) => new RegExp(`--color-${name}:\\s*(#[0-9a-fA-F]{6})`).exec(tokens)?.[1] ?? fallback;
 
+/**
+ * main.tsx starts the app in steps through dynamic imports (see there). Vite preloads only the
+ * entry's static imports from index.html; this adds `modulepreload` links for the chunks the entry
+ * imports dynamically on every start (src/app/start.tsx and what it needs), so they download in
+ * parallel with the entry instead of after it has run.
+ */
+function preloadStartChunks(entries: RegExp): Plugin {
+  return {
+    name: 'stringfield:preload-start-chunks',
+    apply: 'build',
+    transformIndexHtml: {
+      order: 'post',
+      handler(html, ctx) {
+        if (!ctx.bundle) return html;
+        const chunks = new Map<string, { imports: string[]; facadeModuleId: string | null }>();
+        for (const output of Object.values(ctx.bundle)) if (output.type === 'chunk') chunks.set(output.fileName, output);
+        const files = new Set<string>();
+        const add = (file: string) => {
+          if (files.has(file)) return;
+          files.add(file);
+          for (const dep of chunks.get(file)?.imports ?? []) add(dep);
+        };
+        for (const [file, chunk] of chunks) if (chunk.facadeModuleId && entries.test(chunk.facadeModuleId)) add(file);
+        return [...files]
+          .filter((file) => !html.includes(`/${file}"`))
+          .map((file) => ({ tag: 'link', attrs: { rel: 'modulepreload', crossorigin: true, href: `/${file}` }, injectTo: 'head' as const }));
+      },
+    },
+  };
+}
+
+// Not the toaster (Sonner, loaded after the first page) nor the table (TanStack Table, table pages only).
+const uiModules = (id: string) =>
+  /[\\/]src[\\/](components[\\/]ui|config)[\\/]|[\\/]src[\\/]lib[\\/](cn|use-media-query)\.ts$/.test(id) &&
+  !/[\\/](app-toaster|data-table)\.tsx$/.test(id);
+
 export default defineConfig({
   plugins: [
     react(),
+    preloadStartChunks(/[\\/]src[\\/]app[\\/]start\.tsx$/),
     tailwindcss(),
     // Installable app with the shell precached, so a technician's phone opens Stringfield without
     // signal. API answers are never cached by the service worker: the app keeps its own copy of the
@@ -84,6 +121,9 @@ export default defineConfig({
         codeSplitting: {
           groups: [
             { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler|react-router)[\\/]/, priority: 20 },
+            // The design system and the app's small shared helpers in one file: a route otherwise
+            // waits on a dozen 1–2 KB files, each a round trip on a phone's connection.
+            { name: 'ui', test: uiModules, priority: 10 },
           ],
         },
       },

@@ -6,12 +6,15 @@ import { expect, test } from '@playwright/test';
 
 // Issue 10: the technician's phone must get its first field page from under 200 KB of gzipped
 // script and style, whatever else the app grows. Counted from the built app (Vite's manifest): the
-// entry chunk with its static imports and CSS, plus the field page's route chunk with its own static
-// imports. Chunks loaded later on demand (a string's check form, charts, other pages) are not counted.
+// entry chunk with its static imports and CSS, the app start-up the entry always imports next
+// (src/app/start.tsx: React's renderer, the providers, the router), plus the field page's route chunk,
+// each with its own static imports. Chunks loaded later on demand (a string's check form, charts,
+// other pages) are not counted.
 
 const LIMIT_KB = 200;
 const dist = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../apps/web/dist');
 const fieldRoute = 'src/app/routes/field-checks.tsx';
+const appStart = 'src/app/start.tsx';
 
 type ManifestChunk = { file: string; isEntry?: boolean; imports?: string[]; css?: string[] };
 type Manifest = Record<string, ManifestChunk>;
@@ -46,7 +49,10 @@ test('the technician’s first field page needs under 200 KB of gzipped JS and C
   expect(entry, 'an entry chunk in the manifest').toBeDefined();
 
   const entryFiles = filesOf(manifest, staticClosure(manifest, entry!));
-  const fieldFiles = filesOf(manifest, new Set([...staticClosure(manifest, entry!), ...staticClosure(manifest, fieldRoute)]));
+  const fieldFiles = filesOf(
+    manifest,
+    new Set([...staticClosure(manifest, entry!), ...staticClosure(manifest, appStart), ...staticClosure(manifest, fieldRoute)]),
+  );
   const sizes = fieldFiles.map((file) => ({ file, gzipBytes: gzipBytes(file) })).sort((a, b) => b.gzipBytes - a.gzipBytes);
   const entryBytes = sizes.filter((s) => entryFiles.includes(s.file)).reduce((sum, s) => sum + s.gzipBytes, 0);
   const totalBytes = sizes.reduce((sum, s) => sum + s.gzipBytes, 0);

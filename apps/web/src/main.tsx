@@ -2,27 +2,39 @@
 import '@fontsource-variable/inter';
 import '@fontsource-variable/space-grotesk';
 import './styles.css';
-import { StrictMode } from 'react';
-import { createRoot } from 'react-dom/client';
-import { RouterProvider } from 'react-router';
 import { startMeEarly } from '@/features/auth/api/get-me';
 import { toast } from '@/lib/toast';
 import { registerSW } from 'virtual:pwa-register';
-import { AppProvider } from './app/provider';
-import { router } from './app/router';
+import { preloadFirstPage } from './app/first-page';
 
+// The static frame in index.html is on screen already. Starting the app is split into a few short
+// tasks rather than one long one (who is signed in, the first page's code, React, the app's modules,
+// the router, then the first render, which React slices itself), so a phone's main thread is never
+// held for long and a tap is answered in between. The app's own code is already downloading
+// (modulepreload in index.html, see vite.config.ts); the page's code starts in the second task.
 startMeEarly();
+void start();
 
-const container = document.getElementById('root');
-if (!container) throw new Error('The page has no #root element');
+async function start() {
+  await nextTask();
+  preloadFirstPage(window.location.pathname);
+  await nextTask();
+  const { createRoot } = await import('react-dom/client');
+  const container = document.getElementById('root');
+  if (!container) throw new Error('The page has no #root element');
+  const root = createRoot(container);
+  await nextTask();
+  const { createAppRouter, renderApp } = await import('./app/start');
+  await nextTask();
+  const router = createAppRouter();
+  await nextTask();
+  renderApp(root, router);
+}
 
-createRoot(container).render(
-  <StrictMode>
-    <AppProvider>
-      <RouterProvider router={router} />
-    </AppProvider>
-  </StrictMode>,
-);
+/** Resolves in a new task, so the browser may paint and handle input first. */
+function nextTask(): Promise<void> {
+  return new Promise((resolve) => setTimeout(resolve, 0));
+}
 
 // The service worker exists only in a production build. A new release takes over at once; the page
 // reloads into it, except on a field page where a reading may be half typed: there it asks first.

@@ -1,7 +1,6 @@
 import { createBrowserRouter, Navigate } from 'react-router';
 import { routes } from '@/config/paths';
 import { FieldSyncLayout } from './routes/field-sync';
-import { HomeRoute } from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 import { SessionLoading } from './routes/full-page-states';
 import { ProtectedLayout } from './routes/protected-layout';
@@ -9,8 +8,11 @@ import { RequirePermission } from './routes/require-permission';
 import { RootLayout } from './routes/root-layout';
 import { RouteError } from './routes/route-error';
 
-/** The only place where features meet: each route composes what its page needs. */
-export const router = createBrowserRouter([
+/**
+ * The only place where features meet: each route composes what its page needs. A function, not a
+ * module-level router, so that main.tsx decides when the first navigation starts (see app/start.tsx).
+ */
+export const createAppRouter = () => createBrowserRouter([
   {
     element: <RootLayout />,
     errorElement: <RouteError />,
@@ -31,7 +33,9 @@ export const router = createBrowserRouter([
             // Sends the technician's queued checks from whichever page is open.
             element: <FieldSyncLayout />,
             children: [
-              { index: true, element: <HomeRoute /> },
+              // "Today" loads on demand like the other pages (app/first-page.ts starts it early when it is
+              // the first page), so the sign-in page and other roles' first pages do not run its code.
+              { index: true, lazy: async () => ({ Component: (await import('./routes/home')).HomeRoute }) },
               {
                 path: routes.people,
                 // Admin-only pages load on demand, so a technician's phone never downloads them.

@@ -1,4 +1,5 @@
 import { can } from '@stringfield/shared';
+import { useDeferredValue } from 'react';
 import { Link, useParams } from 'react-router';
 import { ButtonLink } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -32,6 +33,11 @@ export function FieldChecksRoute() {
   const id = Number(workOrderId);
   const isValidId = Number.isInteger(id) && id > 0;
   const ticket = useWorkOrder(isValidId ? id : 0);
+  // The field page is a large render. TanStack's updates render synchronously; through deferred values
+  // the page follows the answer in a background render that React does in short slices, so the main
+  // thread stays free for input meanwhile.
+  const data = useDeferredValue(ticket.data);
+  const isPending = useDeferredValue(ticket.isPending);
 
   if (!isValidId || (ticket.isError && isApiError(ticket.error) && ticket.error.status === 404)) {
     return (
@@ -47,7 +53,7 @@ export function FieldChecksRoute() {
       />
     );
   }
-  if (ticket.isPending && ticket.fetchStatus === 'paused') {
+  if (isPending && ticket.fetchStatus === 'paused') {
     return (
       <EmptyState
         icon="inbox"
@@ -61,8 +67,8 @@ export function FieldChecksRoute() {
       />
     );
   }
-  if (ticket.isPending) return <FieldSkeleton />;
-  if (!ticket.data) {
+  if (isPending) return <FieldSkeleton />;
+  if (!data) {
     return (
       <div className="mx-auto max-w-3xl">
         <Link to={paths.home()} className="mb-4 inline-flex min-h-touch items-center gap-1 font-semibold text-brand">
@@ -77,5 +83,5 @@ export function FieldChecksRoute() {
       </div>
     );
   }
-  return <FieldPage key={ticket.data.id} ticket={ticket.data} userId={user.id} canRecord={can(user.role, 'checks:record')} />;
+  return <FieldPage key={data.id} ticket={data} userId={user.id} canRecord={can(user.role, 'checks:record')} />;
 }

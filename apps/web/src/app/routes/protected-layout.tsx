@@ -1,5 +1,5 @@
 import { onlineManager } from '@tanstack/react-query';
-import { useSyncExternalStore } from 'react';
+import { useDeferredValue, useSyncExternalStore } from 'react';
 import { Navigate, Outlet, useLocation } from 'react-router';
 import { Icon } from '@/components/ui/icon';
 import { paths } from '@/config/paths';
@@ -25,7 +25,14 @@ export function ProtectedLayout() {
   const me = useMe();
   const isOnline = useIsOnline();
   const location = useLocation();
-  const view = sessionView(me, isOnline);
+  // The answer about the session decides whether the whole app (frame and page) is drawn. TanStack's
+  // updates render synchronously; through deferred values that first drawing is a background render
+  // that React does in short slices, so the main thread stays free for input while it mounts.
+  const status = useDeferredValue(me.status);
+  const fetchStatus = useDeferredValue(me.fetchStatus);
+  const data = useDeferredValue(me.data);
+  const error = useDeferredValue(me.error);
+  const view = sessionView({ status, fetchStatus, data, error }, useDeferredValue(isOnline));
 
   if (view.kind === 'loading') return <SessionLoading />;
   if (view.kind === 'error') return <SessionError error={view.error} onRetry={() => void me.refetch()} isRetrying={me.isFetching} />;

@@ -1,3 +1,4 @@
+import { useDeferredValue } from 'react';
 import { Navigate, useNavigate, useSearchParams } from 'react-router';
 import { Alert } from '@/components/ui/alert';
 import { safeNext } from '@/config/paths';
@@ -10,11 +11,15 @@ export function SignInRoute() {
   const [searchParams] = useSearchParams();
   const navigate = useNavigate();
   const me = useMe();
+  // TanStack's updates render synchronously; through deferred values the form is drawn in a background
+  // render that React does in short slices once the answer is in.
+  const isPending = useDeferredValue(me.isPending);
+  const user = useDeferredValue(me.data);
   const next = safeNext(searchParams.get('next'));
   const hasNext = next !== '/';
 
-  if (me.isPending) return <SessionLoading />;
-  if (me.data) return <Navigate to={next} replace />;
+  if (isPending) return <SessionLoading />;
+  if (user) return <Navigate to={next} replace />;
 
   return (
     <AuthShell title="Sign in" description="Use the e-mail address your administrator invited.">

@@ -1,6 +1,6 @@
 import { can, type WorkOrderListItem } from '@stringfield/shared';
 import type { SortingState, Updater } from '@tanstack/react-table';
-import { useState } from 'react';
+import { useDeferredValue, useState } from 'react';
 import { useLocation, useSearchParams } from 'react-router';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -54,7 +54,12 @@ export function WorkOrdersRoute() {
   };
 
   const hasFilters = hasWorkOrderFilters(params, role);
-  const data = workOrders.data;
+  // A page of tickets is the board's heaviest render. TanStack's updates render synchronously; through
+  // deferred values the table follows the answer in a background render that React does in short
+  // slices, so the main thread stays free for input meanwhile.
+  const data = useDeferredValue(workOrders.data);
+  const isLoading = useDeferredValue(workOrders.isPending);
+  const isStale = useDeferredValue(workOrders.isPlaceholderData);
   const pageItems = data?.items ?? [];
   const clear = () => update({ ...defaultWorkOrderListParams(role), sort: params.sort });
 
@@ -138,8 +143,8 @@ export function WorkOrdersRoute() {
             items={pageItems}
             sorting={sorting}
             onSortingChange={onSortingChange}
-            isLoading={workOrders.isPending}
-            isFetching={workOrders.isPlaceholderData}
+            isLoading={isLoading}
+            isFetching={isStale}
             selection={selection}
             emptyState={
               hasFilters ? (

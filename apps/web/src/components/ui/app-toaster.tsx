@@ -8,6 +8,9 @@ export function AppToaster() {
   useEffect(() => markToasterMounted(), []);
   return (
     <Toaster
+      // The app is English only (index.html: lang="en", no dir). Said here, Sonner need not ask the
+      // browser, which would force a style pass of the whole page while the first page is still mounting.
+      dir="ltr"
       position="top-center"
       closeButton
       duration={6000}

@@ -9,6 +9,7 @@ import {
 } from '@tanstack/react-table';
 import type { ReactNode } from 'react';
 import { cn } from '@/lib/cn';
+import { useMediaQuery } from '@/lib/use-media-query';
 import { Icon } from './icon';
 import { LoadingRegion, Skeleton } from './skeleton';
 
@@ -47,7 +48,8 @@ type DataTableProps<T> = {
 /**
  * The one generic table. Sorting and paging are the server's job (manual mode) so the state can live
  * in the URL. Below 768 px each row becomes a card of label/value pairs, readable on a phone without
- * sideways scrolling.
+ * sideways scrolling. Only the layout on screen is rendered (drawing both and letting CSS hide one
+ * doubles the DOM a phone builds for its first page); it switches when the window crosses 768 px.
  */
 export function DataTable<T>({
   columns,
@@ -74,6 +76,7 @@ export function DataTable<T>({
     state: { sorting },
     onSortingChange,
   });
+  const isTable = useMediaQuery(tableQuery);
 
   if (isLoading) {
     return (
@@ -100,97 +103,102 @@ export function DataTable<T>({
 
   return (
     <div aria-busy={isFetching || undefined} className={cn('transition-opacity', isFetching && 'opacity-60')}>
-      {/* Desktop and tablet: a real table. */}
-      <div className="hidden overflow-x-auto rounded-card border border-line bg-surface shadow-card md:block">
-        <table className="w-full border-collapse text-left">
-          <caption className="sr-only">{caption}</caption>
-          <thead className="bg-sunken">
-            {table.getHeaderGroups().map((headerGroup) => (
-              <tr key={headerGroup.id}>
-                {headerGroup.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const canSort = header.column.getCanSort() && Boolean(onSortingChange);
-                  const label = flexRender(header.column.columnDef.header, header.getContext());
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : canSort ? 'none' : undefined}
-                      className={cn('border-b-2 border-edge/50 px-4 py-2 text-sm font-semibold text-ink-muted', header.column.columnDef.meta?.className)}
-                    >
-                      {header.isPlaceholder ? null : canSort ? (
-                        <button
-                          type="button"
-                          onClick={header.column.getToggleSortingHandler()}
-                          className="-mx-2 inline-flex min-h-touch items-center gap-1.5 rounded-control px-2 hover:bg-paper hover:text-ink"
-                        >
-                          {label}
-                          <Icon
-                            name={sorted === 'asc' ? 'chevronUp' : sorted === 'desc' ? 'chevronDown' : 'sort'}
-                            className={cn('size-4', !sorted && 'opacity-60')}
-                          />
-                          {/* Rely on aria-sort for the state; this tells what a press will do. */}
-                          <span className="sr-only">{sorted === 'asc' ? ', sort descending' : ', sort ascending'}</span>
-                        </button>
-                      ) : (
-                        label
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {rows.map((row) => (
-              <tr key={row.id} className="border-b border-line last:border-b-0 hover:bg-paper/70">
-                {row.getVisibleCells().map((cell) =>
-                  cell.column.columnDef.meta?.isRowHeader ? (
-                    <th key={cell.id} scope="row" className={cn('px-4 py-3 align-middle font-normal', cell.column.columnDef.meta.className)}>
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </th>
-                  ) : (
-                    <td key={cell.id} className={cn('px-4 py-3 align-middle', cell.column.columnDef.meta?.className)}>
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </td>
-                  ),
-                )}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
-
-      {/* Phone: one card per row. */}
-      <ul aria-label={caption} className="flex flex-col gap-3 md:hidden">
-        {rows.map((row) => {
-          const cells = row.getVisibleCells();
-          const render = (cell: (typeof cells)[number]) => flexRender(cell.column.columnDef.cell, cell.getContext());
-          const titleCells = cells.filter((cell) => cell.column.columnDef.meta?.isCardTitle);
-          const labelledCells = cells.filter((cell) => !cell.column.columnDef.meta?.isCardTitle && cell.column.columnDef.meta?.label);
-          const restCells = cells.filter((cell) => !cell.column.columnDef.meta?.isCardTitle && !cell.column.columnDef.meta?.label);
-          return (
-            <li key={row.id} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4 shadow-card">
-              {titleCells.map((cell) => (
-                <div key={cell.id}>{render(cell)}</div>
+      {isTable ? (
+        /* Desktop and tablet: a real table. */
+        <div className="overflow-x-auto rounded-card border border-line bg-surface shadow-card">
+          <table className="w-full border-collapse text-left">
+            <caption className="sr-only">{caption}</caption>
+            <thead className="bg-sunken">
+              {table.getHeaderGroups().map((headerGroup) => (
+                <tr key={headerGroup.id}>
+                  {headerGroup.headers.map((header) => {
+                    const sorted = header.column.getIsSorted();
+                    const canSort = header.column.getCanSort() && Boolean(onSortingChange);
+                    const label = flexRender(header.column.columnDef.header, header.getContext());
+                    return (
+                      <th
+                        key={header.id}
+                        scope="col"
+                        aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : canSort ? 'none' : undefined}
+                        className={cn('border-b-2 border-edge/50 px-4 py-2 text-sm font-semibold text-ink-muted', header.column.columnDef.meta?.className)}
+                      >
+                        {header.isPlaceholder ? null : canSort ? (
+                          <button
+                            type="button"
+                            onClick={header.column.getToggleSortingHandler()}
+                            className="-mx-2 inline-flex min-h-touch items-center gap-1.5 rounded-control px-2 hover:bg-paper hover:text-ink"
+                          >
+                            {label}
+                            <Icon
+                              name={sorted === 'asc' ? 'chevronUp' : sorted === 'desc' ? 'chevronDown' : 'sort'}
+                              className={cn('size-4', !sorted && 'opacity-60')}
+                            />
+                            {/* Rely on aria-sort for the state; this tells what a press will do. */}
+                            <span className="sr-only">{sorted === 'asc' ? ', sort descending' : ', sort ascending'}</span>
+                          </button>
+                        ) : (
+                          label
+                        )}
+                      </th>
+                    );
+                  })}
+                </tr>
               ))}
-              {labelledCells.length > 0 ? (
-                <dl className="flex flex-col gap-2">
-                  {labelledCells.map((cell) => (
-                    <div key={cell.id} className="flex items-baseline justify-between gap-4">
-                      <dt className="text-sm text-ink-muted">{cell.column.columnDef.meta?.label}</dt>
-                      <dd className="text-right">{render(cell)}</dd>
-                    </div>
-                  ))}
-                </dl>
-              ) : null}
-              {restCells.map((cell) => (
-                <div key={cell.id}>{render(cell)}</div>
+            </thead>
+            <tbody>
+              {rows.map((row) => (
+                <tr key={row.id} className="border-b border-line last:border-b-0 hover:bg-paper/70">
+                  {row.getVisibleCells().map((cell) =>
+                    cell.column.columnDef.meta?.isRowHeader ? (
+                      <th key={cell.id} scope="row" className={cn('px-4 py-3 align-middle font-normal', cell.column.columnDef.meta.className)}>
+                        {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                      </th>
+                    ) : (
+                      <td key={cell.id} className={cn('px-4 py-3 align-middle', cell.column.columnDef.meta?.className)}>
+                        {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                      </td>
+                    ),
+                  )}
+                </tr>
               ))}
-            </li>
-          );
-        })}
-      </ul>
+            </tbody>
+          </table>
+        </div>
+      ) : (
+        /* Phone: one card per row. */
+        <ul aria-label={caption} className="flex flex-col gap-3">
+          {rows.map((row) => {
+            const cells = row.getVisibleCells();
+            const render = (cell: (typeof cells)[number]) => flexRender(cell.column.columnDef.cell, cell.getContext());
+            const titleCells = cells.filter((cell) => cell.column.columnDef.meta?.isCardTitle);
+            const labelledCells = cells.filter((cell) => !cell.column.columnDef.meta?.isCardTitle && cell.column.columnDef.meta?.label);
+            const restCells = cells.filter((cell) => !cell.column.columnDef.meta?.isCardTitle && !cell.column.columnDef.meta?.label);
+            return (
+              <li key={row.id} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4 shadow-card">
+                {titleCells.map((cell) => (
+                  <div key={cell.id}>{render(cell)}</div>
+                ))}
+                {labelledCells.length > 0 ? (
+                  <dl className="flex flex-col gap-2">
+                    {labelledCells.map((cell) => (
+                      <div key={cell.id} className="flex items-baseline justify-between gap-4">
+                        <dt className="text-sm text-ink-muted">{cell.column.columnDef.meta?.label}</dt>
+                        <dd className="text-right">{render(cell)}</dd>
+                      </div>
+                    ))}
+                  </dl>
+                ) : null}
+                {restCells.map((cell) => (
+                  <div key={cell.id}>{render(cell)}</div>
+                ))}
+              </li>
+            );
+          })}
+        </ul>
+      )}
     </div>
   );
 }
+
+/** Tailwind's `md:` breakpoint, from which rows are a table rather than cards. */
+const tableQuery = '(min-width: 48rem)';

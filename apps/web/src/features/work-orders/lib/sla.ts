@@ -63,6 +63,11 @@ export function slaCountdown(dueAt: string, status: WorkOrderStatus, nowMs: numb
   };
 }
 
+// Formatters by locale, zone and options. Making an Intl.DateTimeFormat costs far more than using one,
+// and a board renders a deadline per row (25 rows, a handful of zones).
+const siteTimeFormats = new Map<string, Intl.DateTimeFormat>();
+const zonedPartsFormats = new Map<string, Intl.DateTimeFormat>();
+
 /**
  * A moment as the site's clock shows it, e.g. `Tue 14 Oct, 15:30 CEST`. Plants are worked in local
  * time, so deadlines and history read in the site's zone, with the zone named.
@@ -76,33 +81,44 @@ export function formatSiteTime(
   const date = new Date(iso);
   if (Number.isNaN(date.getTime())) return iso;
   try {
-    return new Intl.DateTimeFormat(locale, {
-      timeZone,
-      weekday: withWeekday ? 'short' : undefined,
-      day: 'numeric',
-      month: 'short',
-      year: withYear ? 'numeric' : undefined,
-      hour: '2-digit',
-      minute: '2-digit',
-      hourCycle: 'h23',
-      timeZoneName: 'short',
-    }).format(date);
+    const key = `${locale}|${timeZone}|${withWeekday}|${withYear}`;
+    let format = siteTimeFormats.get(key);
+    if (!format) {
+      format = new Intl.DateTimeFormat(locale, {
+        timeZone,
+        weekday: withWeekday ? 'short' : undefined,
+        day: 'numeric',
+        month: 'short',
+        year: withYear ? 'numeric' : undefined,
+        hour: '2-digit',
+        minute: '2-digit',
+        hourCycle: 'h23',
+        timeZoneName: 'short',
+      });
+      siteTimeFormats.set(key, format);
+    }
+    return format.format(date);
   } catch {
     return date.toISOString();
   }
 }
 
 function zonedParts(date: Date, timeZone: string) {
-  const parts = new Intl.DateTimeFormat('en-US', {
-    timeZone,
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-    hour: '2-digit',
-    minute: '2-digit',
-    second: '2-digit',
-    hourCycle: 'h23',
-  }).formatToParts(date);
+  let format = zonedPartsFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat('en-US', {
+      timeZone,
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+      second: '2-digit',
+      hourCycle: 'h23',
+    });
+    zonedPartsFormats.set(timeZone, format);
+  }
+  const parts = format.formatToParts(date);
   const get = (type: Intl.DateTimeFormatPartTypes) => Number(parts.find((p) => p.type === type)?.value ?? 0);
   return {
     year: get('year'),
