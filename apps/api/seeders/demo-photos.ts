@@ -1,4 +1,5 @@
 import sharp, { type Sharp } from 'sharp';
+import { offsetMsAt, wallClockAt } from '../src/lib/zoned-time.ts';
 
 // Invented pictures for the demo evidence, drawn rather than photographed: a multimeter showing the
 // after-repair reading, a junction box before and after a diode change, and a false-colour thermal image
@@ -10,41 +11,14 @@ export const PHOTO_HEIGHT = 480;
 const W = PHOTO_WIDTH;
 const H = PHOTO_HEIGHT;
 
-const wallClocks = new Map<string, Intl.DateTimeFormat>();
-function wallClock(timeZone: string): Intl.DateTimeFormat {
-  let f = wallClocks.get(timeZone);
-  if (!f) {
-    f = new Intl.DateTimeFormat('en-US', {
-      timeZone,
-      hourCycle: 'h23',
-      year: 'numeric',
-      month: '2-digit',
-      day: '2-digit',
-      hour: '2-digit',
-      minute: '2-digit',
-      second: '2-digit',
-    });
-    wallClocks.set(timeZone, f);
-  }
-  return f;
-}
-
 /** EXIF as a phone writes it: the capture time on the site's wall clock with its UTC offset (EXIF 2.31). */
 function exifOf(at: Date, timeZone: string, camera: string) {
-  const parts = wallClock(timeZone).formatToParts(at);
-  const p = (type: Intl.DateTimeFormatPartTypes) => parts.find((x) => x.type === type)!.value;
-  const wallMs = Date.UTC(
-    Number(p('year')),
-    Number(p('month')) - 1,
-    Number(p('day')),
-    Number(p('hour')),
-    Number(p('minute')),
-    Number(p('second')),
-  );
-  const offsetMin = Math.round((wallMs - Math.floor(at.getTime() / 1000) * 1000) / 60_000);
+  const w = wallClockAt(at, timeZone);
+  const offsetMin = Math.round(offsetMsAt(at.getTime(), timeZone) / 60_000);
   const abs = Math.abs(offsetMin);
-  const offset = `${offsetMin < 0 ? '-' : '+'}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
-  const stamp = `${p('year')}:${p('month')}:${p('day')} ${p('hour')}:${p('minute')}:${p('second')}`;
+  const two = (n: number) => String(n).padStart(2, '0');
+  const offset = `${offsetMin < 0 ? '-' : '+'}${two(Math.floor(abs / 60))}:${two(abs % 60)}`;
+  const stamp = `${w.year}:${two(w.month)}:${two(w.day)} ${two(w.hour)}:${two(w.minute)}:${two(w.second)}`;
   return {
     IFD0: { Make: 'Stringfield Demo', Model: camera, DateTime: stamp },
     IFD2: { DateTimeOriginal: stamp, OffsetTimeOriginal: offset },

@@ -6,23 +6,16 @@
 // the backup script itself, so without S3_* this refuses.
 import fs from 'node:fs/promises';
 import path from 'node:path';
-import { GetObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
+import { GetObjectCommand, ListObjectsV2Command, PutObjectCommand } from '@aws-sdk/client-s3';
 import { env } from '../config/env.ts';
+import { s3Client } from '../lib/storage.ts';
 
 const [cmd, dirArg, indexArg] = process.argv.slice(2);
 if (!env.s3) throw new Error('Uploads are on local disk (no S3_* configured): nothing to copy from a bucket.');
 if ((cmd !== 'export' && cmd !== 'import') || !dirArg || !indexArg) throw new Error('Use: bucket-copy.ts export|import DIR INDEX');
 const dir = path.resolve(dirArg);
-const { bucket, ...config } = env.s3;
-const client = new S3Client({
-  endpoint: config.endpoint,
-  region: config.region,
-  forcePathStyle: config.forcePathStyle,
-  credentials: { accessKeyId: config.accessKeyId, secretAccessKey: config.secretAccessKey },
-  requestChecksumCalculation: 'WHEN_REQUIRED',
-  responseChecksumValidation: 'WHEN_REQUIRED',
-  maxAttempts: 3,
-});
+const { bucket } = env.s3;
+const client = s3Client(env.s3);
 
 /** The file of an object key; keys are ours (`photos/2026/12/…`), but a backup folder is not trusted. */
 function fileOf(key: string): string {

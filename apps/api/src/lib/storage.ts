@@ -49,6 +49,22 @@ export class LocalDiskStorage implements FileStorage {
   }
 }
 
+/** The SDK client for a configured bucket (the API's storage and the backup's bucket copy share it). */
+export function s3Client(config: S3Config): S3Client {
+  return new S3Client({
+    endpoint: config.endpoint,
+    region: config.region,
+    forcePathStyle: config.forcePathStyle,
+    credentials: { accessKeyId: config.accessKeyId, secretAccessKey: config.secretAccessKey },
+    // Since 3.729 the SDK adds CRC32 checksums to every PutObject; some S3-compatible stores (older MinIO,
+    // Dell ECS, Backblaze B2) refuse them. Send and check them only where the S3 API requires them.
+    requestChecksumCalculation: 'WHEN_REQUIRED',
+    responseChecksumValidation: 'WHEN_REQUIRED',
+    maxAttempts: 3,
+    requestHandler: { connectionTimeout: 5_000, requestTimeout: 30_000 },
+  });
+}
+
 /** An S3-compatible bucket (AWS, MinIO, Ceph …); the bucket stays private and reads go through signed URLs. */
 export class S3Storage implements FileStorage {
   private readonly client: S3Client;
@@ -56,18 +72,7 @@ export class S3Storage implements FileStorage {
 
   constructor(config: S3Config) {
     this.bucket = config.bucket;
-    this.client = new S3Client({
-      endpoint: config.endpoint,
-      region: config.region,
-      forcePathStyle: config.forcePathStyle,
-      credentials: { accessKeyId: config.accessKeyId, secretAccessKey: config.secretAccessKey },
-      // Since 3.729 the SDK adds CRC32 checksums to every PutObject; some S3-compatible stores (older MinIO,
-      // Dell ECS, Backblaze B2) refuse them. Send and check them only where the S3 API requires them.
-      requestChecksumCalculation: 'WHEN_REQUIRED',
-      responseChecksumValidation: 'WHEN_REQUIRED',
-      maxAttempts: 3,
-      requestHandler: { connectionTimeout: 5_000, requestTimeout: 30_000 },
-    });
+    this.client = s3Client(config);
   }
 
   private async send<T>(what: string, key: string, run: () => Promise<T>): Promise<T> {

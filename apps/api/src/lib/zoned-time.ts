@@ -20,14 +20,6 @@ function formatter(timeZone: string): Intl.DateTimeFormat {
   return f;
 }
 
-/** The zone's offset from UTC at instant `ms`, in milliseconds (east positive). */
-function offsetMsAt(ms: number, timeZone: string): number {
-  const parts = formatter(timeZone).formatToParts(ms);
-  const n = (type: Intl.DateTimeFormatPartTypes) => Number(parts.find((p) => p.type === type)?.value);
-  const wall = Date.UTC(n('year'), n('month') - 1, n('day'), n('hour'), n('minute'), n('second'));
-  return wall - Math.floor(ms / 1000) * 1000;
-}
-
 export type WallClock = {
   year: number;
   month: number;
@@ -36,6 +28,20 @@ export type WallClock = {
   minute: number;
   second: number;
 };
+
+/** What a clock in the IANA zone shows at instant `at` (a Date or epoch milliseconds). */
+export function wallClockAt(at: Date | number, timeZone: string): WallClock {
+  const parts = formatter(timeZone).formatToParts(at);
+  const n = (type: Intl.DateTimeFormatPartTypes) => Number(parts.find((p) => p.type === type)?.value);
+  return { year: n('year'), month: n('month'), day: n('day'), hour: n('hour'), minute: n('minute'), second: n('second') };
+}
+
+/** The zone's offset from UTC at instant `ms`, in milliseconds (east positive). */
+export function offsetMsAt(ms: number, timeZone: string): number {
+  const w = wallClockAt(ms, timeZone);
+  const wall = Date.UTC(w.year, w.month - 1, w.day, w.hour, w.minute, w.second);
+  return wall - Math.floor(ms / 1000) * 1000;
+}
 
 /**
  * The instant a wall-clock time names in an IANA zone. Like Temporal's 'compatible' choice: a time that
