@@ -149,6 +149,18 @@ async function ticketForEvidence(user: SessionUser, workOrderId: number): Promis
   return wo;
 }
 
+/**
+ * Inside an evidence write's transaction: the ticket read again under a shared lock and still in the field.
+ * The lock holds a status change (hand-in, sign-off) back until the write commits, so a piece of evidence is
+ * either in before the ticket leaves the field or refused, never saved beside a sign-off that did not see it.
+ */
+export async function holdInField(workOrderId: number, transaction: Transaction): Promise<void> {
+  const wo = await WorkOrder.findByPk(workOrderId, { attributes: ['id', 'number', 'status'], transaction, lock: transaction.LOCK.SHARE });
+  if (!wo || wo.status !== 'in_field') {
+    throw new AppError('CONFLICT', `${wo?.number ?? 'The ticket'} left the field while this was being saved; nothing was added.`, undefined, { status: wo?.status ?? null });
+  }
+}
+
 export async function visibleTicket(user: SessionUser, workOrderId: number): Promise<WorkOrder> {
   const wo = await WorkOrder.findByPk(workOrderId);
   if (!wo) throw notFound('That work order');
@@ -237,7 +249,7 @@ export async function uploadPhotos(user: SessionUser, workOrderId: number, files
   const processed: ProcessedImage[] = [];
   for (const [i, file] of files.entries()) processed.push(await processImage(file, metaList[i]!, i, timeZone));
 
-  return photoDtos(await storePhotos(wo.id, user.id, processed));
+  return photoDtos(await storePhotos(wo.id, user.id, processed, { holdInField: true }));
 }
 
 /**
@@ -249,12 +261,13 @@ export async function storePhotos(
   workOrderId: number,
   uploadedById: number,
   processed: ProcessedImage[],
-  options: { transaction?: Transaction; at?: Date } = {},
+  options: { transaction?: Transaction; at?: Date; holdInField?: boolean } = {},
 ): Promise<Photo[]> {
   const { at } = options;
   const written: string[] = [];
   try {
     return await sequelize.transaction({ ...(options.transaction ? { transaction: options.transaction } : {}) }, async (transaction) => {
+      if (options.holdInField) await holdInField(workOrderId, transaction);
       const out: Photo[] = [];
       for (const p of processed) {
         const stem = `photos/${workOrderId}/${randomUUID()}`;
@@ -327,7 +340,10 @@ export async function recordThermalFinding(user: SessionUser, photoId: number, i
   if (!p) throw notFound('That photo');
   await ticketForEvidence(user, p.workOrderId);
   if (p.tag !== 'thermal') throw new AppError('VALIDATION_FAILED', 'Thermal findings belong to photos tagged "thermal".');
-  await ThermalFinding.upsert(thermalFindingRow(photoId, input));
+  await sequelize.transaction(async (transaction) => {
+    await holdInField(p.workOrderId, transaction);
+    await ThermalFinding.upsert(thermalFindingRow(photoId, input), { transaction });
+  });
   return (await photoDtos([p]))[0]!;
 }
 
@@ -449,7 +465,10 @@ function diodeFields(input: DiodeReplacementInput) {
 export async function recordDiodeReplacement(user: SessionUser, workOrderId: number, input: DiodeReplacementInput): Promise<DiodeReplacementDto> {
   const wo = await ticketForEvidence(user, workOrderId);
   await checkDiodeRefs(wo, input);
-  const row = await DiodeReplacement.create({ workOrderId: wo.id, technicianId: user.id, ...diodeFields(input) });
+  const row = await sequelize.transaction(async (transaction) => {
+    await holdInField(wo.id, transaction);
+    return DiodeReplacement.create({ workOrderId: wo.id, technicianId: user.id, ...diodeFields(input) }, { transaction });
+  });
   return (await diodeDtos([row]))[0]!;
 }
 
@@ -458,7 +477,10 @@ export async function updateDiodeReplacement(user: SessionUser, id: number, inpu
   if (!row) throw notFound('That diode replacement');
   const wo = await ticketForEvidence(user, row.workOrderId);
   await checkDiodeRefs(wo, diodeReplacementInputSchema.parse(input));
-  await row.update(diodeFields(input));
+  await sequelize.transaction(async (transaction) => {
+    await holdInField(wo.id, transaction);
+    await row.update(diodeFields(input), { transaction });
+  });
   return (await diodeDtos([row]))[0]!;
 }
 

@@ -233,8 +233,9 @@ export function checkRow(args: {
   };
 }
 
-async function ticketForWork(user: SessionUser, workOrderId: number, transaction?: Transaction): Promise<WorkOrder> {
-  const wo = await WorkOrder.findByPk(workOrderId, { transaction });
+/** The ticket a check is written to, under a shared lock so it cannot leave the field until the check commits. */
+async function ticketForWork(user: SessionUser, workOrderId: number, transaction: Transaction): Promise<WorkOrder> {
+  const wo = await WorkOrder.findByPk(workOrderId, { transaction, lock: transaction.LOCK.SHARE });
   if (!wo) throw notFound('That work order');
   if (wo.assigneeId !== user.id) throw new AppError('FORBIDDEN', `Only the technician assigned to ${wo.number} records its checks.`);
   if (wo.status !== 'in_field') {

@@ -1,7 +1,8 @@
 import { analyzeCurve, simulateString, translateToStc, type IvPoint } from '@stringfield/pv';
 import type { IvTrace as IvTraceDto, SessionUser } from '@stringfield/shared';
 import { AppError, notFound } from '../lib/app-error.ts';
-import { IvTrace, ModuleModel, PvString, StringCheck, WorkOrder } from '../models/index.ts';
+import { IvTrace, ModuleModel, PvString, StringCheck, WorkOrder, sequelize } from '../models/index.ts';
+import { holdInField } from './evidence.service.ts';
 import { getCheckForTrace } from './field-checks.service.ts';
 
 export type ParsedTrace = { points: IvPoint[]; irradianceWm2: number | null; cellTempC: number | null };
@@ -168,14 +169,20 @@ export async function attachIvTrace(user: SessionUser, checkId: number, fileName
       isApproximate: translated.isApproximate,
     },
   };
-  const [row] = await IvTrace.upsert({
+  const [row] = await sequelize.transaction(async (transaction) => {
+    await holdInField(wo.id, transaction);
+    return IvTrace.upsert(
+      {
     checkId,
     fileName: fileName.slice(0, 255),
     irradianceWm2,
     cellTempC,
     pointsJson: JSON.stringify(parsed.points),
     stcPointsJson: JSON.stringify(translated.curve),
-    analysisJson: JSON.stringify(analysis),
+        analysisJson: JSON.stringify(analysis),
+      },
+      { transaction },
+    );
   });
   return toDto(row);
 }

@@ -142,8 +142,14 @@ export async function signOffWorkOrder(user: SessionUser, workOrderId: number, i
   }
   if (wo.version !== input.version) throw new AppError('CONFLICT', `${wo.number} changed while you were reviewing it. Reload and check the evidence again.`, undefined, { status: wo.status });
   const site = (await Site.findByPk(wo.siteId))!;
-  const signOff = await sequelize.transaction((transaction) => recordSignOff(wo, user.id, input, new Date(), transaction));
-  await queueMail(closeOutMail(site.ownerContactEmail, { id: wo.id, number: wo.number, title: wo.title, siteName: site.name, dueAt: wo.dueAt, priority: wo.priority }, user.name, signOff.digest));
+  // The close-out mail is queued in the sign-off's transaction: both are recorded, or neither.
+  await sequelize.transaction(async (transaction) => {
+    const signOff = await recordSignOff(wo, user.id, input, new Date(), transaction);
+    await queueMail(
+      closeOutMail(site.ownerContactEmail, { id: wo.id, number: wo.number, title: wo.title, siteName: site.name, dueAt: wo.dueAt, priority: wo.priority }, user.name, signOff.digest),
+      transaction,
+    );
+  });
   return (await getSignOff(user, wo.id))!;
 }
 
@@ -159,6 +165,12 @@ export async function recordSignOff(
   at: Date,
   transaction: Transaction,
 ): Promise<SignOff> {
+  // The row locked first: evidence writes hold it shared, so the gates below see every piece that committed
+  // and none can be added until the sign-off is in.
+  const locked = await WorkOrder.findByPk(wo.id, { attributes: ['id', 'status', 'version'], transaction, lock: transaction.LOCK.UPDATE });
+  if (!locked || locked.status !== 'awaiting_signoff' || locked.version !== wo.version) {
+    throw new AppError('CONFLICT', `${wo.number} changed while you were reviewing it. Reload and check again.`, undefined, { status: locked?.status ?? null });
+  }
   const gates = await evaluateGates(wo, input.overrides, transaction);
   if (!gates.ok) {
     throw new AppError('CONFLICT', 'The evidence is not complete yet; see the checklist.', undefined, { gates: gates.gates });

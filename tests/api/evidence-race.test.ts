@@ -1,0 +1,90 @@
+import { randomUUID } from 'node:crypto';
+import { QueryTypes, type Transaction } from 'sequelize';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { DiodeReplacement, StringCheck, User, WorkOrder, sequelize } from '../../apps/api/src/models/index.ts';
+import { demoEmail, errorOf, resetDatabase, signIn, type Agent } from './helpers.ts';
+
+// Evidence that reaches the server while the ticket is leaving the field (the technician hands it in, the
+// supervisor signs it off) must either be in before the status changes or be refused. Saved beside a
+// sign-off that never saw it, it would be evidence the signed digest does not cover.
+
+let dispatcher: Agent;
+let tech: Agent;
+let siteId: number;
+let techId: number;
+
+async function ticketInField(): Promise<{ id: number; stringId: number }> {
+  const strings = (await dispatcher.get(`/api/sites/${siteId}/strings?q=INV03-MPPT1`).expect(200)).body.items as Array<{ id: number }>;
+  const created = await dispatcher
+    .post('/api/work-orders')
+    .set('x-csrf-token', dispatcher.csrf)
+    .send({ siteId, strings: [{ stringId: strings[0]!.id, symptom: 'low voltage' }], faultCategory: 'bypass_diode_failure', priority: 'P3', title: 'Race check', source: 'inspection', assigneeId: techId })
+    .expect(201);
+  const id = created.body.items[0].id as number;
+  const { version } = (await tech.get(`/api/work-orders/${id}`).expect(200)).body as { version: number };
+  await tech.post(`/api/work-orders/${id}/transitions`).set('x-csrf-token', tech.csrf).send({ to: 'in_field', version }).expect(200);
+  return { id, stringId: strings[0]!.id };
+}
+
+/** Resolves once another connection of this database is running a statement (the request, now waiting). */
+async function someoneWaits(transaction: Transaction): Promise<void> {
+  const deadline = Date.now() + 10_000;
+  while (Date.now() < deadline) {
+    const [row] = await sequelize.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM information_schema.PROCESSLIST WHERE DB = DATABASE() AND COMMAND = 'Query' AND ID <> CONNECTION_ID()",
+      { type: QueryTypes.SELECT, transaction },
+    );
+    if (Number(row!.n) > 0) return;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+  throw new Error('the request never reached the database');
+}
+
+/**
+ * Holds the ticket row as a status change does, sends `write`, waits until it is stuck behind the lock, moves
+ * the ticket out of the field and commits; then returns what the write got back.
+ */
+async function writeWhileLeavingField(ticketId: number, write: () => PromiseLike<{ status: number; body: unknown }>) {
+  const t = await sequelize.transaction();
+  await WorkOrder.findByPk(ticketId, { transaction: t, lock: t.LOCK.UPDATE });
+  const pending = Promise.resolve(write());
+  await someoneWaits(t);
+  await WorkOrder.update({ status: 'awaiting_signoff' }, { where: { id: ticketId }, transaction: t });
+  await t.commit();
+  return pending;
+}
+
+beforeAll(async () => {
+  await resetDatabase({ plant: true });
+  [dispatcher, tech] = await Promise.all([signIn(demoEmail.dispatcher), signIn(demoEmail.technician)]);
+  siteId = (await dispatcher.get('/api/sites?q=CBD').expect(200)).body.items[0].id;
+  techId = (await User.findOne({ where: { email: demoEmail.technician } }))!.id;
+});
+
+describe('evidence racing a ticket out of the field', () => {
+  it('refuses a check that was waiting on the ticket when it was handed in, and saves nothing', async () => {
+    const { id, stringId } = await ticketInField();
+    const res = await writeWhileLeavingField(id, () =>
+      tech
+        .post(`/api/work-orders/${id}/checks`)
+        .set('x-csrf-token', tech.csrf)
+        .send({ clientId: randomUUID(), stringId, phase: 'after', takenAt: new Date().toISOString(), vocV: 700, iscA: 10.3, irradianceWm2: 1000, irradianceMethod: 'reference_cell', moduleTempC: 25, moduleTempMethod: 'back_sensor', polarityCorrect: true }),
+    );
+    expect(res.status).toBe(409);
+    expect(errorOf(res).message).toMatch(/not in the field/);
+    expect(await StringCheck.count({ where: { workOrderId: id } })).toBe(0);
+  });
+
+  it('refuses a diode replacement that was waiting on the ticket when it was handed in, and saves nothing', async () => {
+    const { id, stringId } = await ticketInField();
+    const res = await writeWhileLeavingField(id, () =>
+      tech
+        .post(`/api/work-orders/${id}/diode-replacements`)
+        .set('x-csrf-token', tech.csrf)
+        .send({ stringId, modulePosition: 2, diodePosition: 1, failureMode: 'short', foundBy: 'voc_deficit', installedPart: { partNumber: 'SBD-15A45V', ratingA: 15, ratingV: 45, type: 'schottky' } }),
+    );
+    expect(res.status).toBe(409);
+    expect(errorOf(res).message).toMatch(/left the field/);
+    expect(await DiodeReplacement.count({ where: { workOrderId: id } })).toBe(0);
+  });
+});
