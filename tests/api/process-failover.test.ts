@@ -4,7 +4,8 @@ import net from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Session } from '../../apps/api/src/models/index.ts';
+import { QueryTypes, type Transaction } from 'sequelize';
+import { Session, User, sequelize } from '../../apps/api/src/models/index.ts';
 import { DEMO_PASSWORD, demoEmail, resetDatabase } from './helpers.ts';
 import { apiTestEnv } from './test-env.ts';
 
@@ -185,4 +186,56 @@ describe('a process told to stop (SIGTERM)', () => {
     expect(c.output()).not.toMatch(/connection manager was closed|"level":50/);
     expect(code).toBe(0);
   }, 30_000);
+
+  it('answers a request it was handling with Connection: close and takes no further request on that connection', async () => {
+    const c = await startApi(await freePort(), 'warn');
+    const browser = new Browser();
+    await browser.fetchCsrf(c.base);
+    expect(
+      (await browser.call(c.base, 'POST', '/api/auth/login', { email: demoEmail.supervisor, password: DEMO_PASSWORD }))
+        .status,
+    ).toBe(200);
+    await browser.fetchCsrf(c.base);
+    // The request is held in the database (its user row locked here) until the process has been told to stop.
+    const user = (await User.findOne({ where: { email: demoEmail.supervisor } }))!;
+    const t = await sequelize.transaction();
+    await User.findByPk(user.id, { transaction: t, lock: t.LOCK.UPDATE });
+    const { port } = new URL(c.base);
+    const socket = net.connect(Number(port), '127.0.0.1');
+    let received = '';
+    socket.on('data', (chunk: Buffer) => (received += chunk.toString()));
+    socket.on('error', () => {});
+    const body = JSON.stringify({ optOut: [] });
+    // Two requests on one keep-alive connection: the second is already waiting when the first is answered.
+    socket.write(
+      `PUT /api/me/mail-preferences HTTP/1.1\r\nHost: 127.0.0.1\r\nCookie: ${browser.cookie}\r\nx-csrf-token: ${browser.csrf}\r\n` +
+        `Content-Type: application/json\r\nContent-Length: ${Buffer.byteLength(body)}\r\n\r\n${body}` +
+        `GET /api/health HTTP/1.1\r\nHost: 127.0.0.1\r\n\r\n`,
+    );
+    await someoneWaits(t);
+    c.child.kill('SIGTERM');
+    await new Promise((r) => setTimeout(r, 300));
+    await t.rollback();
+    await once(socket, 'close');
+    const [code] = (await once(c.child, 'exit')) as [number | null];
+    expect(received).toMatch(/^HTTP\/1\.1 200/);
+    expect(received).toMatch(/\r\nConnection: close\r\n/i);
+    // Before: the connection stayed open after server.close() and the health check was answered too.
+    expect(received.match(/HTTP\/1\.1 \d{3}/g)).toHaveLength(1);
+    expect(code).toBe(0);
+  }, 30_000);
 });
+
+/** Resolves once another connection of this database is running a statement (the request, now waiting). */
+async function someoneWaits(transaction: Transaction): Promise<void> {
+  const deadline = Date.now() + 10_000;
+  while (Date.now() < deadline) {
+    const [row] = await sequelize.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM information_schema.PROCESSLIST WHERE DB = DATABASE() AND COMMAND = 'Query' AND ID <> CONNECTION_ID()",
+      { type: QueryTypes.SELECT, transaction },
+    );
+    if (Number(row!.n) > 0) return;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+  throw new Error('the request never reached the database');
+}

@@ -7,6 +7,7 @@ import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { csrfSync } from 'csrf-sync';
 import { env } from './config/env.ts';
+import { countInFlight } from './lib/in-flight.ts';
 import { logger } from './lib/logger.ts';
 import { passport } from './lib/passport.ts';
 import { MariaDbSessionStore } from './lib/session-store.ts';
@@ -45,6 +46,7 @@ export function createApp(options: AppOptions = {}): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', env.TRUST_PROXY ? 1 : false);
+  app.use(countInFlight);
   app.use(requestId);
   app.use(
     pinoHttp({

@@ -1,5 +1,6 @@
 import { createApp } from './app.ts';
 import { env } from './config/env.ts';
+import { beginDraining, requestsInFlight, requestsSettled } from './lib/in-flight.ts';
 import { logger } from './lib/logger.ts';
 import { closeMailer, mailIdle, startMailSweep } from './lib/mailer.ts';
 import { startOverdueSweep } from './services/overdue-sweep.service.ts';
@@ -49,15 +50,39 @@ async function shutdown(signal: string) {
   closing = true;
   logger.info({ signal }, 'shutting down');
   setTimeout(() => process.exit(1), 10_000).unref();
-  stopSweep();
-  stopOverdue();
-  // No new connections; idle keep-alive ones close now, busy ones once their response is out.
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  if (!(await databaseQuiet(200, 7_000))) logger.warn('database work still running at shutdown; closing anyway');
-  await mailIdle();
-  closeMailer();
-  await sequelize.close();
-  process.exit(0);
+  let code = 0;
+  const step = async (what: string, run: () => unknown) => {
+    try {
+      await run();
+    } catch (err) {
+      code = 1;
+      logger.error({ err }, `shutdown: ${what} failed`);
+    }
+  };
+  const deadline = Date.now() + 7_000;
+  let closed: Promise<void> = Promise.resolve();
+  await step('stopping the sweeps', () => {
+    stopSweep();
+    stopOverdue();
+  });
+  await step('closing the listener', () => {
+    // No new connections; answers from now on carry `Connection: close`; idle keep-alive ones close now.
+    beginDraining();
+    closed = new Promise<void>((resolve) => server.close(() => resolve()));
+    server.closeIdleConnections();
+  });
+  await step('waiting for requests', async () => {
+    if (!(await requestsSettled(deadline))) logger.warn({ inFlight: requestsInFlight() }, 'requests still running at shutdown; closing anyway');
+    if (!(await databaseQuiet(200, Math.max(0, deadline - Date.now())))) logger.warn('database work still running at shutdown; closing anyway');
+    server.closeAllConnections();
+    await closed;
+  });
+  await step('sending queued mail', async () => {
+    await mailIdle();
+    closeMailer();
+  });
+  await step('closing the database pool', () => sequelize.close());
+  process.exit(code);
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'));
 process.on('SIGINT', () => void shutdown('SIGINT'));
