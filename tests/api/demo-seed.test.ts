@@ -4,7 +4,8 @@ import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
 import type { Photo as PhotoDto } from '@stringfield/shared';
-import { Photo, WorkOrder } from '../../apps/api/src/models/index.ts';
+import { Photo, WorkOrder, sequelize } from '../../apps/api/src/models/index.ts';
+import { seedDemo } from '../../apps/api/seeders/demo.ts';
 import { meterPhoto, thermalPhoto } from '../../apps/api/seeders/demo-photos.ts';
 import { demoEmail, resetDatabase, signIn, type Agent } from './helpers.ts';
 import { apiTestEnv } from './test-env.ts';
@@ -192,4 +193,21 @@ describe('demo pictures', () => {
     const t = { hottestC: 71, referenceC: 43, ambientC: 20, seed: 1, at, timeZone: 'Europe/Vienna' };
     expect((await thermalPhoto(t)).equals(await thermalPhoto(t))).toBe(true);
   });
+});
+
+describe('a demo seed that fails part-way', () => {
+  it('leaves neither rows nor photo files behind', async () => {
+    await resetDatabase({ plant: false }); // the demo users only; the uploads folder is emptied
+    // A real failure late in the seed, after its photos are written: the sign-off table is not there.
+    await sequelize.query('RENAME TABLE sign_offs TO sign_offs_away');
+    try {
+      await expect(seedDemo({ force: true })).rejects.toThrow(/sign_offs/);
+    } finally {
+      await sequelize.query('RENAME TABLE sign_offs_away TO sign_offs');
+    }
+    expect(await WorkOrder.count()).toBe(0);
+    expect(await Photo.count()).toBe(0);
+    const left = await fs.readdir(apiTestEnv.UPLOADS_DIR, { recursive: true, withFileTypes: true }).catch(() => []);
+    expect(left.filter((e) => e.isFile()).map((e) => e.name)).toEqual([]);
+  }, 120_000);
 });

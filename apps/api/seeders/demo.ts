@@ -1,4 +1,5 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
+import { runRollbackHooks } from '../src/lib/rollback-hooks.ts';
 import { hashPassword } from '../src/lib/passwords.ts';
 import { User, sequelize } from '../src/models/index.ts';
 import { DEMO_PASSWORD, demoUsers } from './demo-users.ts';
@@ -17,7 +18,9 @@ export async function seedDemo({ force = false, plant = true } = {}): Promise<Se
     return { status: 'skipped', reason: `the database holds ${foreign} non-demo account(s)`, users: 0 };
   }
   const passwordHash = await hashPassword(DEMO_PASSWORD);
+  let seeding: Transaction | undefined;
   const created = await sequelize.transaction(async (transaction) => {
+    seeding = transaction;
     const existing = await User.findAll({ where: { email: { [Op.in]: demoUsers.map((u) => u.email) } }, transaction });
     const byEmail = new Map(existing.map((u) => [u.email, u]));
     for (const u of demoUsers) {
@@ -28,6 +31,10 @@ export async function seedDemo({ force = false, plant = true } = {}): Promise<Se
     if (!plant) return { sites: 0, strings: 0, workOrders: 0 };
     const layout = await seedDemoPlant(transaction);
     return { ...layout, workOrders: await seedDemoWorkOrders(transaction) };
+  }).catch(async (err: unknown) => {
+    // The photos' files were written as the rows were; the rows are gone now, so are the files.
+    if (seeding) await runRollbackHooks(seeding);
+    throw err;
   });
   return { status: 'seeded', users: demoUsers.length, ...created };
 }

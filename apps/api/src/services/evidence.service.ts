@@ -17,6 +17,7 @@ import { z } from 'zod';
 import { env } from '../config/env.ts';
 import { AppError, notFound } from '../lib/app-error.ts';
 import { logger } from '../lib/logger.ts';
+import { onRollback } from '../lib/rollback-hooks.ts';
 import { storage } from '../lib/storage.ts';
 import { exifDateTimeToDate } from '../lib/zoned-time.ts';
 import { DiodeReplacement, Photo, PvString, Site, ThermalFinding, User, WorkOrder, WorkOrderString, sequelize } from '../models/index.ts';
@@ -257,6 +258,12 @@ export async function uploadPhotos(user: SessionUser, workOrderId: number, files
  * passes its own); a failure removes the files written, so nothing is left half done. `at` stamps the rows
  * with an upload time other than now (the demo seed writes history).
  */
+async function removeFiles(keys: string[]): Promise<void> {
+  await Promise.all(
+    keys.map((k) => storage.delete(k).catch((e: unknown) => logger.error({ err: (e as Error).message, key: k }, 'upload clean-up left a file behind'))),
+  );
+}
+
 export async function storePhotos(
   workOrderId: number,
   uploadedById: number,
@@ -266,7 +273,7 @@ export async function storePhotos(
   const { at } = options;
   const written: string[] = [];
   try {
-    return await sequelize.transaction({ ...(options.transaction ? { transaction: options.transaction } : {}) }, async (transaction) => {
+    const stored = await sequelize.transaction({ ...(options.transaction ? { transaction: options.transaction } : {}) }, async (transaction) => {
       if (options.holdInField) await holdInField(workOrderId, transaction);
       const out: Photo[] = [];
       for (const p of processed) {
@@ -306,10 +313,11 @@ export async function storePhotos(
       }
       return out;
     });
+    // Inside a caller's transaction the rows can still roll back after this savepoint; the files go with them.
+    if (options.transaction) onRollback(options.transaction, () => removeFiles(written));
+    return stored;
   } catch (err) {
-    await Promise.all(
-      written.map((k) => storage.delete(k).catch((e: unknown) => logger.error({ err: (e as Error).message, key: k }, 'upload clean-up left a file behind'))),
-    );
+    await removeFiles(written);
     throw err;
   }
 }
