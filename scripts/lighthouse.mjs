@@ -12,7 +12,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import * as chromeLauncher from 'chrome-launcher';
 import lighthouse from 'lighthouse';
-import { dataDir, ensureWebBuild, fail, isPortOpen, log, root, tsxBin } from './lib.mjs';
+import { aptInstall, dataDir, ensureWebBuild, fail, isPortOpen, log, root, tsxBin } from './lib.mjs';
 
 const targets = { performance: 90, accessibility: 95 };
 const slot = process.env.TEST_SLOT ?? '9';
@@ -159,6 +159,7 @@ async function audit(chrome, url, cookie, jsonName) {
   };
 }
 
+if (!process.env.CHROME_PATH && !fs.existsSync(chromePath)) aptInstall(['chromium'], 'Chromium (for Lighthouse)');
 ensureWebBuild();
 log(`Starting the test server on ${baseUrl} (slot ${slot})…`);
 const stopServer = await startServer();

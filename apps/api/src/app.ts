@@ -9,6 +9,7 @@ import { csrfSync } from 'csrf-sync';
 import { env } from './config/env.ts';
 import { countInFlight } from './lib/in-flight.ts';
 import { logger } from './lib/logger.ts';
+import { precompressedAssets, webShell } from './lib/web-shell.ts';
 import { passport } from './lib/passport.ts';
 import { MariaDbSessionStore } from './lib/session-store.ts';
 import { requestId } from './middleware/request-id.ts';
@@ -139,6 +140,7 @@ export function createApp(options: AppOptions = {}): Express {
 
   const webDist = options.webDist === undefined ? env.WEB_DIST : options.webDist;
   if (webDist && fs.existsSync(path.join(webDist, 'index.html'))) {
+    app.use(precompressedAssets(webDist));
     app.use(
       express.static(webDist, {
         index: false,
@@ -147,10 +149,7 @@ export function createApp(options: AppOptions = {}): Express {
         },
       }),
     );
-    app.get(/^(?!\/api\/).*/, (_req, res) => {
-      res.setHeader('Cache-Control', 'no-cache');
-      res.sendFile(path.join(webDist, 'index.html'));
-    });
+    app.get(/^(?!\/api\/).*/, webShell(webDist));
   }
 
   app.use(errorHandler);

@@ -1,0 +1,70 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import type { RequestHandler } from 'express';
+
+/**
+ * dist/first-pages.json, written by the web build: for each page a crew opens first (a bookmark, a link in
+ * a message), its address pattern and the script files its route needs.
+ */
+type FirstPage = { pattern: string; files: string[] };
+
+type Shell = { mtimeMs: number; plain: string; pages: Array<{ pattern: RegExp; html: string }> };
+
+/**
+ * The web app's HTML for an address. For a first page it also lists that page's scripts and the session
+ * lookup as preloads, so a phone fetches them with the app's own script instead of a round trip after it
+ * has run. Read again whenever the build changes it.
+ */
+export function webShell(webDist: string): RequestHandler {
+  const indexFile = path.join(webDist, 'index.html');
+  let shell: Shell | null = null;
+  const load = (): Shell => {
+    const { mtimeMs } = fs.statSync(indexFile);
+    if (shell?.mtimeMs === mtimeMs) return shell;
+    const plain = fs.readFileSync(indexFile, 'utf8');
+    let firstPages: FirstPage[] = [];
+    try {
+      firstPages = JSON.parse(fs.readFileSync(path.join(webDist, 'first-pages.json'), 'utf8')) as FirstPage[];
+    } catch {
+      // An older or hand-made build: every address gets the plain HTML.
+    }
+    const withPreloads = (files: string[]) => {
+      const links = files
+        .filter((file) => /^assets\/[\w.-]+\.js$/.test(file) && !plain.includes(`/${file}"`))
+        .map((file) => `<link rel="modulepreload" crossorigin href="/${file}">`);
+      // The app asks who is signed in before anything else; same URL, mode and credentials as its fetch.
+      links.push('<link rel="preload" as="fetch" crossorigin href="/api/auth/me">');
+      return plain.replace('</head>', `${links.join('')}</head>`);
+    };
+    shell = { mtimeMs, plain, pages: firstPages.map((p) => ({ pattern: new RegExp(p.pattern), html: withPreloads(p.files) })) };
+    return shell;
+  };
+  return (req, res) => {
+    const { plain, pages } = load();
+    res.setHeader('Cache-Control', 'no-cache');
+    res.type('html').send(pages.find((p) => p.pattern.test(req.path))?.html ?? plain);
+  };
+}
+
+const precompressedTypes: Record<string, string> = { '.js': 'text/javascript; charset=utf-8', '.css': 'text/css; charset=utf-8' };
+
+/**
+ * Scripts and styles brotli-compressed by the build (a `.br` beside each): sent as they are to a browser
+ * that takes brotli — smaller than gzip and no compression work per request. Others get the plain file.
+ */
+export function precompressedAssets(webDist: string): RequestHandler {
+  const assets = path.join(webDist, 'assets');
+  return (req, res, next) => {
+    const type = precompressedTypes[path.extname(req.path)];
+    if (!type || !req.path.startsWith('/assets/') || !/\bbr\b/.test(req.headers['accept-encoding'] ?? '')) return next();
+    const file = path.join(assets, path.basename(req.path));
+    if (`/assets/${path.basename(req.path)}` !== req.path || !fs.existsSync(`${file}.br`)) return next();
+    res.setHeader('Content-Type', type);
+    res.setHeader('Content-Encoding', 'br');
+    res.setHeader('Vary', 'Accept-Encoding');
+    res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+    res.sendFile(`${file}.br`, (err) => {
+      if (err && !res.headersSent) next();
+    });
+  };
+}
