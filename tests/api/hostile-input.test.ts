@@ -10,6 +10,7 @@ import {
   DiodeReplacement,
   Inverter,
   InverterModel,
+  MailOutbox,
   ModuleModel,
   Photo,
   StringCheck,
@@ -46,6 +47,11 @@ beforeAll(async () => {
   const invited = await agents.get('admin')!.post('/api/users').set('x-csrf-token', agents.get('admin')!.csrf)
     .send({ email: 'fuzz-target@stringfield.test', name: 'Fuzz Target', role: 'technician' });
   expect(invited.status).toBe(201);
+  // An instrument of the register for PATCH /api/instruments/:id (the demo seed registers none).
+  const tech = agents.get('technician')!;
+  const meter = await tech.post('/api/instruments').set('x-csrf-token', tech.csrf).send({ kind: 'multimeter', serial: 'MM-FUZZ-0001', calibrationDueOn: '2027-06-30' });
+  expect(meter.status).toBe(201);
+  await mailIdle();
   Object.assign(ids, {
     site: ticket.siteId,
     string: string.stringId,
@@ -58,6 +64,8 @@ beforeAll(async () => {
     check: (await StringCheck.findOne({ order: [['id', 'ASC']] }))?.id ?? 999_999,
     photo: (await Photo.findOne({ order: [['id', 'ASC']] }))?.id ?? 999_999,
     diode: (await DiodeReplacement.findOne({ order: [['id', 'ASC']] }))?.id ?? 999_999,
+    instrument: meter.body.id as number,
+    mail: (await MailOutbox.findOne({ order: [['id', 'ASC']] }))!.id,
   });
   tables = (await sequelize.query<Record<string, string>>('SHOW TABLES', { type: QueryTypes.SELECT }))
     .map((row) => Object.values(row)[0]!)
@@ -79,9 +87,16 @@ function pathOf(r: RouteEntry): string {
     '/api/checks/': 'check',
     '/api/photos/': 'photo',
     '/api/diode-replacements/': 'diode',
+    '/api/instruments/': 'instrument',
+    '/api/mail/': 'mail',
   };
   return r.path
-    .replace(/^(\/api\/(?:fleet\/)?[a-z-]+\/):id/, (_m, prefix: string) => `${prefix}${ids[byPrefix[prefix] ?? ''] ?? 999_999}`)
+    .replace(/^(\/api\/(?:fleet\/)?[a-z-]+\/):id/, (_m, prefix: string) => {
+      // A route on a kind of record not listed here would only ever be fuzzed as "not found".
+      const id = ids[byPrefix[prefix] ?? ''];
+      if (id === undefined) throw new Error(`${r.method} ${r.path}: add its records to pathOf`);
+      return `${prefix}${id}`;
+    })
     .replace(':size', 'thumb')
     .replace(':name.csv', 'checks.csv');
 }
