@@ -5,6 +5,8 @@
 import { execFileSync } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
 import fs from 'node:fs';
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import autocannon from 'autocannon';
@@ -132,6 +134,28 @@ async function main() {
     say(
       `  same page as one raw SQL statement: median ${fmt(r.median)}; API / raw = ${(b.median / r.median).toFixed(2)}× (target ≤ 1.5×) (${load()})`,
     );
+    // The same statement behind a bare node:http server (driver pool, JSON, no framework, no session), asked
+    // by the same client: what HTTP itself costs, so that the API's own share can be read off.
+    const pool = mariadb.createPool({ host: '127.0.0.1', port: dbPort, user: 'stringfield', password: dbPassword, database: benchDb, bigIntAsNumber: true, connectionLimit: 4 });
+    const bare = http.createServer((_req, res) => {
+      pool.query(rawSql).then(
+        (rows: unknown) => {
+          const body = JSON.stringify(rows);
+          res.writeHead(200, { 'content-type': 'application/json', 'content-length': Buffer.byteLength(body) });
+          res.end(body);
+        },
+        () => res.writeHead(500).end(),
+      );
+    });
+    await new Promise<void>((resolve) => bare.listen(0, '127.0.0.1', resolve));
+    const bareUrl = `http://127.0.0.1:${(bare.address() as AddressInfo).port}/`;
+    await time(10, () => fetch(bareUrl).then((x) => x.arrayBuffer()));
+    const rh = await time(100, () => fetch(bareUrl).then((x) => x.arrayBuffer()));
+    await new Promise((resolve) => bare.close(resolve));
+    await pool.end();
+    say(
+      `  same statement behind a bare node:http server: median ${fmt(rh.median)}; API / bare HTTP = ${(b.median / rh.median).toFixed(2)}× (${load()})`,
+    );
 
     // Where the API's time goes: an endpoint with no session, the cheapest signed-in endpoint (session and
     // user, no service), and the board's service call in this process (ORM and queries, no HTTP).
@@ -162,7 +186,7 @@ async function main() {
     await sequelize.close();
     say(
       `  breakdown (medians): health, no session ${fmt(health.median)}; /api/auth/me, session + user ${fmt(me.median)}; ` +
-        `board service in-process (ORM + 2 parallel queries + JSON) ${fmt(svc.median)} (${load()})`,
+        `board service in-process (ORM + 2 parallel queries + JSON) ${fmt(svc.median)}; service / raw = ${(svc.median / r.median).toFixed(2)}× (${load()})`,
     );
 
     const list = (await (
