@@ -1,8 +1,7 @@
 import { randomUUID } from 'node:crypto';
-import { QueryTypes, type Transaction } from 'sequelize';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { DiodeReplacement, StringCheck, User, WorkOrder, sequelize } from '../../apps/api/src/models/index.ts';
-import { demoEmail, errorOf, resetDatabase, signIn, type Agent } from './helpers.ts';
+import { demoEmail, errorOf, resetDatabase, signIn, someoneWaits, type Agent } from './helpers.ts';
 
 // Evidence that reaches the server while the ticket is leaving the field (the technician hands it in, the
 // supervisor signs it off) must either be in before the status changes or be refused. Saved beside a
@@ -24,20 +23,6 @@ async function ticketInField(): Promise<{ id: number; stringId: number }> {
   const { version } = (await tech.get(`/api/work-orders/${id}`).expect(200)).body as { version: number };
   await tech.post(`/api/work-orders/${id}/transitions`).set('x-csrf-token', tech.csrf).send({ to: 'in_field', version }).expect(200);
   return { id, stringId: strings[0]!.id };
-}
-
-/** Resolves once another connection of this database is running a statement (the request, now waiting). */
-async function someoneWaits(transaction: Transaction): Promise<void> {
-  const deadline = Date.now() + 10_000;
-  while (Date.now() < deadline) {
-    const [row] = await sequelize.query<{ n: number }>(
-      "SELECT COUNT(*) AS n FROM information_schema.PROCESSLIST WHERE DB = DATABASE() AND COMMAND = 'Query' AND ID <> CONNECTION_ID()",
-      { type: QueryTypes.SELECT, transaction },
-    );
-    if (Number(row!.n) > 0) return;
-    await new Promise((r) => setTimeout(r, 20));
-  }
-  throw new Error('the request never reached the database');
 }
 
 /**

@@ -1,6 +1,7 @@
 import fs from 'node:fs/promises';
 import supertest from 'supertest';
 import type { Express } from 'express';
+import { QueryTypes, type Transaction } from 'sequelize';
 import { expect } from 'vitest';
 import { createApp } from '../../apps/api/src/app.ts';
 import { sequelize } from '../../apps/api/src/models/index.ts';
@@ -113,4 +114,18 @@ export function tokenFromLink(text: string): string {
 
 export function errorOf(res: { body: unknown }) {
   return (res.body as { error: { code: string; message: string; fields?: Record<string, string> } }).error;
+}
+
+/** Resolves once another connection of this database is running a statement (a request now waiting on a lock). */
+export async function someoneWaits(transaction: Transaction): Promise<void> {
+  const deadline = Date.now() + 10_000;
+  while (Date.now() < deadline) {
+    const [row] = await sequelize.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM information_schema.PROCESSLIST WHERE DB = DATABASE() AND COMMAND = 'Query' AND ID <> CONNECTION_ID()",
+      { type: QueryTypes.SELECT, transaction },
+    );
+    if (Number(row!.n) > 0) return;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+  throw new Error('the request never reached the database');
 }

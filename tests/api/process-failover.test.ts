@@ -4,9 +4,8 @@ import net from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { QueryTypes, type Transaction } from 'sequelize';
 import { Session, User, sequelize } from '../../apps/api/src/models/index.ts';
-import { DEMO_PASSWORD, demoEmail, resetDatabase } from './helpers.ts';
+import { DEMO_PASSWORD, demoEmail, resetDatabase, someoneWaits } from './helpers.ts';
 import { apiTestEnv } from './test-env.ts';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
@@ -226,16 +225,3 @@ describe('a process told to stop (SIGTERM)', () => {
   }, 30_000);
 });
 
-/** Resolves once another connection of this database is running a statement (the request, now waiting). */
-async function someoneWaits(transaction: Transaction): Promise<void> {
-  const deadline = Date.now() + 10_000;
-  while (Date.now() < deadline) {
-    const [row] = await sequelize.query<{ n: number }>(
-      "SELECT COUNT(*) AS n FROM information_schema.PROCESSLIST WHERE DB = DATABASE() AND COMMAND = 'Query' AND ID <> CONNECTION_ID()",
-      { type: QueryTypes.SELECT, transaction },
-    );
-    if (Number(row!.n) > 0) return;
-    await new Promise((r) => setTimeout(r, 20));
-  }
-  throw new Error('the request never reached the database');
-}
