@@ -224,4 +224,3 @@ describe('a process told to stop (SIGTERM)', () => {
     expect(code).toBe(0);
   }, 30_000);
 });
-
