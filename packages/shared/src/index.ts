@@ -12,3 +12,4 @@ export * from './field-checks.ts';
 export * from './evidence.ts';
 export * from './sign-off.ts';
 export * from './fleet.ts';
+export * from './zoned-time.ts';

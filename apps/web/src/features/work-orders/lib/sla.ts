@@ -1,4 +1,4 @@
-import { DUE_SOON_HOURS, openStatuses, type WorkOrderStatus } from '@stringfield/shared';
+import { DUE_SOON_HOURS, offsetMsAt, openStatuses, wallClockAt, type WorkOrderStatus } from '@stringfield/shared';
 
 const MINUTE_MS = 60_000;
 const HOUR_MS = 60 * MINUTE_MS;
@@ -66,7 +66,6 @@ export function slaCountdown(dueAt: string, status: WorkOrderStatus, nowMs: numb
 // Formatters by locale, zone and options. Making an Intl.DateTimeFormat costs far more than using one,
 // and a board renders a deadline per row (25 rows, a handful of zones).
 const siteTimeFormats = new Map<string, Intl.DateTimeFormat>();
-const zonedPartsFormats = new Map<string, Intl.DateTimeFormat>();
 
 /**
  * A moment as the site's clock shows it, e.g. `Tue 14 Oct, 15:30 CEST`. Plants are worked in local
@@ -103,49 +102,20 @@ export function formatSiteTime(
   }
 }
 
-function zonedParts(date: Date, timeZone: string) {
-  let format = zonedPartsFormats.get(timeZone);
-  if (!format) {
-    format = new Intl.DateTimeFormat('en-US', {
-      timeZone,
-      year: 'numeric',
-      month: '2-digit',
-      day: '2-digit',
-      hour: '2-digit',
-      minute: '2-digit',
-      second: '2-digit',
-      hourCycle: 'h23',
-    });
-    zonedPartsFormats.set(timeZone, format);
-  }
-  const parts = format.formatToParts(date);
-  const get = (type: Intl.DateTimeFormatPartTypes) => Number(parts.find((p) => p.type === type)?.value ?? 0);
-  return {
-    year: get('year'),
-    month: get('month'),
-    day: get('day'),
-    hour: get('hour'),
-    minute: get('minute'),
-    second: get('second'),
-  };
-}
-
 /** The calendar day (`2025-10-14`) a moment falls on at the site. */
 export function siteDayKey(at: Date | string, timeZone: string): string {
-  const p = zonedParts(typeof at === 'string' ? new Date(at) : at, timeZone);
+  const p = wallClockAt(typeof at === 'string' ? new Date(at) : at, timeZone);
   return `${p.year}-${String(p.month).padStart(2, '0')}-${String(p.day).padStart(2, '0')}`;
 }
 
 /** Minutes the zone is ahead of UTC at that moment (CEST: 120). */
 function offsetMinutes(date: Date, timeZone: string): number {
-  const p = zonedParts(date, timeZone);
-  const asUtc = Date.UTC(p.year, p.month - 1, p.day, p.hour, p.minute, p.second);
-  return Math.round((asUtc - Math.floor(date.getTime() / 1000) * 1000) / MINUTE_MS);
+  return Math.round(offsetMsAt(date.getTime(), timeZone) / MINUTE_MS);
 }
 
 /** An ISO moment as the value of a `datetime-local` input showing site time (`2025-10-14T15:30`). */
 export function toSiteInputValue(iso: string, timeZone: string): string {
-  const p = zonedParts(new Date(iso), timeZone);
+  const p = wallClockAt(new Date(iso), timeZone);
   const pad = (n: number) => String(n).padStart(2, '0');
   return `${p.year}-${pad(p.month)}-${pad(p.day)}T${pad(p.hour)}:${pad(p.minute)}`;
 }
