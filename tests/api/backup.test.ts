@@ -47,11 +47,46 @@ describe('backup and restore', () => {
   const env = { DB_NAME: apiTestEnv.DB_NAME, UPLOADS_DIR: apiTestEnv.UPLOADS_DIR };
   const live = `${apiTestEnv.DB_NAME}_restore_live`;
   const liveUploads = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-restore-uploads-'));
+  const liveEnv = { DB_NAME: live, UPLOADS_DIR: liveUploads };
   afterAll(async () => {
     await sequelize.query(`DROP DATABASE IF EXISTS \`${restoredDb}\``);
     await sequelize.query(`DROP DATABASE IF EXISTS \`${live}\``);
-    for (const d of [dir, liveUploads, `${liveUploads}.restoring`]) fs.rmSync(d, { recursive: true, force: true });
+    for (const d of [dir, liveUploads, `${liveUploads}.restoring`, `${liveUploads}.replaced`]) fs.rmSync(d, { recursive: true, force: true });
   });
+  const list = (d: string) => (fs.existsSync(d) ? fs.readdirSync(d, { recursive: true }).map(String).sort() : []);
+  const leftovers = async () => (await databases()).filter((d) => d.startsWith(`${live}__`));
+  /** Makes the live installation differ from the backup, so that a restore that goes ahead shows. */
+  const diverge = async () => {
+    await sequelize.query(`DELETE FROM \`${live}\`.string_checks`);
+    fs.writeFileSync(path.join(liveUploads, 'written-after-the-backup.jpg'), 'x');
+    const state = { db: await fingerprint(live), uploads: list(liveUploads) };
+    expect(state.db).not.toEqual(await fingerprint(apiTestEnv.DB_NAME));
+    return state;
+  };
+  const expectUnchanged = async (state: Awaited<ReturnType<typeof diverge>>) => {
+    expect(await fingerprint(live)).toEqual(state.db);
+    expect(list(liveUploads)).toEqual(state.uploads);
+    expect(await leftovers()).toEqual([]);
+    expect(fs.existsSync(`${liveUploads}.restoring`)).toBe(false);
+    expect(fs.existsSync(`${liveUploads}.replaced`)).toBe(false);
+  };
+  /** A copy of the backup, changed by `change`, removed after `use`. */
+  const withCopy = async (change: (copy: string) => void, use: (copy: string) => Promise<void>) => {
+    const copy = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-backup-copy-'));
+    try {
+      fs.cpSync(dir, copy, { recursive: true });
+      change(copy);
+      await use(copy);
+    } finally {
+      fs.rmSync(copy, { recursive: true, force: true });
+    }
+  };
+  /** The manifest as backups written before digests were recorded had it. */
+  const withoutDigests = (copy: string) => {
+    const manifestFile = path.join(copy, 'manifest.json');
+    const { sha256: _digests, ...manifest } = JSON.parse(fs.readFileSync(manifestFile, 'utf8')) as Record<string, unknown>;
+    fs.writeFileSync(manifestFile, JSON.stringify(manifest));
+  };
 
   it('round-trips the database: same tables, row counts and checksums', async () => {
     const made = run(['backup', '--to', dir], env);
@@ -75,13 +110,12 @@ describe('backup and restore', () => {
     const r = run(['restore', '--from', dir], { DB_NAME: live, UPLOADS_DIR: liveUploads });
     expect(r.status, r.stderr).toBe(0);
     expect(await fingerprint(live)).toEqual(await fingerprint(apiTestEnv.DB_NAME));
-    const list = (d: string) => (fs.existsSync(d) ? fs.readdirSync(d, { recursive: true }).map(String).sort() : []);
     expect(list(liveUploads)).toEqual(list(path.join(dir, 'uploads')));
     expect((await databases()).filter((d) => d.startsWith(`${live}__`))).toEqual([]);
   }, 120_000);
 
   it('refuses a damaged backup and leaves the database as it was', async () => {
-    await sequelize.query(`DELETE FROM \`${live}\`.comments`); // the state a failed restore must keep
+    await sequelize.query(`DELETE FROM \`${live}\`.string_checks`); // the state a failed restore must keep
     const before = await fingerprint(live);
     const damaged = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-backup-damaged-'));
     try {
@@ -117,6 +151,144 @@ describe('backup and restore', () => {
       expect(fs.existsSync(`${liveUploads}.restoring`)).toBe(false);
     } finally {
       fs.rmSync(broken, { recursive: true, force: true });
+    }
+  }, 120_000);
+
+  it('refuses a backup whose manifest has no digests unless --unverified is given', async () => {
+    const state = await diverge();
+    await withCopy(withoutDigests, async (copy) => {
+      const r = run(['restore', '--from', copy], liveEnv);
+      expect(r.status).toBe(1);
+      expect(r.stderr).toMatch(/has no SHA-256 digests .*cannot be checked\. To restore it anyway, run the same command with --unverified.*Nothing was restored/);
+      await expectUnchanged(state);
+    });
+  }, 120_000);
+
+  it('restores a backup without digests with --unverified when its dump is complete, and says it was not checked', async () => {
+    await diverge();
+    await withCopy(withoutDigests, async (copy) => {
+      const r = run(['restore', '--from', copy, '--unverified'], liveEnv);
+      expect(r.status, r.stderr).toBe(0);
+      expect(r.stdout).toMatch(/has no digests: restoring it unverified/);
+      expect(await fingerprint(live)).toEqual(await fingerprint(apiTestEnv.DB_NAME));
+      expect(list(liveUploads)).toEqual(list(path.join(dir, 'uploads')));
+      expect(await leftovers()).toEqual([]);
+    });
+  }, 120_000);
+
+  it('refuses a backup without digests, even with --unverified, when its dump is cut off', async () => {
+    const state = await diverge();
+    const cut = (copy: string) => {
+      withoutDigests(copy);
+      // Cut at the end of a table's data: what is left loads cleanly, it just lacks the later tables.
+      const sqlFile = path.join(copy, 'database.sql');
+      const text = fs.readFileSync(sqlFile, 'utf8');
+      const end = text.lastIndexOf('\nUNLOCK TABLES;\n', text.length / 2);
+      expect(end).toBeGreaterThan(0);
+      fs.writeFileSync(sqlFile, text.slice(0, end + '\nUNLOCK TABLES;\n'.length));
+    };
+    await withCopy(cut, async (copy) => {
+      const r = run(['restore', '--from', copy, '--unverified'], liveEnv);
+      expect(r.status).toBe(1);
+      expect(r.stderr).toMatch(/does not end with mariadb-dump's "-- Dump completed" line: the dump is cut off.*Nothing was restored/);
+      await expectUnchanged(state);
+    });
+  }, 120_000);
+
+  it('refuses a backup whose uploads hold a symbolic link and leaves the database as it was', async () => {
+    const state = await diverge();
+    const link = (copy: string) => {
+      fs.mkdirSync(path.join(copy, 'uploads'), { recursive: true });
+      fs.symlinkSync('/etc/hostname', path.join(copy, 'uploads', 'linked.jpg'));
+    };
+    await withCopy(link, async (copy) => {
+      const r = run(['restore', '--from', copy], liveEnv);
+      expect(r.status).toBe(1);
+      expect(r.stderr).toMatch(/holds 1 entries that are not plain files or folders: uploads\/linked\.jpg \(symbolic link\)\. A backup holds plain files and folders only.*Nothing was restored/);
+      await expectUnchanged(state);
+    });
+  }, 120_000);
+
+  it('refuses to restore over what an earlier, unfinished restore set aside', async () => {
+    const state = await diverge();
+    // Uploads moved aside by a restore that stopped before removing them.
+    fs.mkdirSync(`${liveUploads}.replaced`);
+    fs.writeFileSync(path.join(`${liveUploads}.replaced`, 'only-copy.jpg'), 'x');
+    try {
+      const r = run(['restore', '--from', dir], liveEnv);
+      expect(r.status).toBe(1);
+      expect(r.stderr).toMatch(/\.replaced is left from an earlier restore that did not finish.*Nothing was restored/s);
+      expect(fs.readdirSync(`${liveUploads}.replaced`)).toEqual(['only-copy.jpg']);
+    } finally {
+      fs.rmSync(`${liveUploads}.replaced`, { recursive: true, force: true });
+    }
+    // Tables moved aside by a restore that stopped before dropping them.
+    await sequelize.query(`CREATE DATABASE \`${live}__replaced\``);
+    await sequelize.query(`CREATE TABLE \`${live}__replaced\`.comments (id INT PRIMARY KEY)`);
+    try {
+      const r = run(['restore', '--from', dir], liveEnv);
+      expect(r.status).toBe(1);
+      expect(r.stderr).toMatch(/__replaced is left from an earlier restore that did not finish and still holds tables.*Nothing was restored/s);
+      expect(await databases()).toContain(`${live}__replaced`);
+    } finally {
+      await sequelize.query(`DROP DATABASE IF EXISTS \`${live}__replaced\``);
+    }
+    await expectUnchanged(state);
+  }, 120_000);
+
+  it('refuses a backup of a database without tables instead of emptying the live one', async () => {
+    const state = await diverge();
+    const empty = `${apiTestEnv.DB_NAME}_restore_empty`;
+    const emptyBackup = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-backup-empty-'));
+    try {
+      await sequelize.query(`DROP DATABASE IF EXISTS \`${empty}\``);
+      await sequelize.query(`CREATE DATABASE \`${empty}\``);
+      const made = run(['backup', '--to', emptyBackup], { DB_NAME: empty, UPLOADS_DIR: path.join(emptyBackup, 'no-uploads') });
+      expect(made.status, made.stderr).toBe(0);
+      const r = run(['restore', '--from', emptyBackup], liveEnv);
+      expect(r.status).toBe(1);
+      expect(r.stderr).toMatch(/loaded without creating a single table: not a backup of a Stringfield database\. Nothing was restored/);
+      await expectUnchanged(state);
+    } finally {
+      await sequelize.query(`DROP DATABASE IF EXISTS \`${empty}\``);
+      fs.rmSync(emptyBackup, { recursive: true, force: true });
+    }
+  }, 120_000);
+
+  it('refuses up front when the live uploads folder is a mount point, before anything is changed', async ({ skip }) => {
+    const state = await diverge();
+    const parent = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-restore-mounted-'));
+    const mounted = path.join(parent, 'uploads');
+    fs.mkdirSync(mounted);
+    // A file system of its own where the uploads live, as a container volume would be.
+    const mount = spawnSync('mount', ['-t', 'tmpfs', '-o', 'size=4m', 'tmpfs', mounted], { encoding: 'utf8' });
+    try {
+      if (mount.status !== 0) skip(`cannot mount a tmpfs here: ${mount.stderr || mount.error}`);
+      fs.writeFileSync(path.join(mounted, 'on-the-volume.jpg'), 'x');
+      const r = run(['restore', '--from', dir], { DB_NAME: live, UPLOADS_DIR: mounted });
+      expect(r.status).toBe(1);
+      expect(r.stderr).toMatch(/Cannot restore the uploads: the uploads folder .* is on another file system than .* \(a mount point\).*Mount the volume one folder higher.*Nothing was restored/s);
+      await expectUnchanged(state);
+      expect(list(mounted)).toEqual(['on-the-volume.jpg']);
+      expect(fs.readdirSync(parent)).toEqual(['uploads']);
+    } finally {
+      if (mount.status === 0) spawnSync('umount', [mounted]);
+      fs.rmSync(parent, { recursive: true, force: true });
+    }
+  }, 120_000);
+
+  it('swaps the tables back when the uploads folder cannot be swapped in', async ({ skip }) => {
+    const state = await diverge();
+    // An immutable folder cannot be renamed, even by root: the rename after the table swap really fails.
+    const locked = spawnSync('chattr', ['+i', liveUploads], { encoding: 'utf8' });
+    try {
+      if (locked.status !== 0) skip(`cannot make a folder immutable here: ${locked.stderr || locked.error}`);
+      const r = run(['restore', '--from', dir], liveEnv);
+      expect(r.status).toBe(1);
+      expect(r.stderr).toMatch(/Swapping in the restored uploads failed: EPERM.*The tables were swapped back: .* are as they were/);
+      await expectUnchanged(state);
+    } finally {
+      if (locked.status === 0) spawnSync('chattr', ['-i', liveUploads]);
     }
   }, 120_000);
 });
