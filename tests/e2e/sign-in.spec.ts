@@ -81,3 +81,51 @@ test('sign out everywhere ends the session on the other device too', async ({ br
     await laptop.close();
   }
 });
+
+test('after sign-out nothing of the person is on screen: their page goes at once, and never shows again', async ({ browser }) => {
+  // A shared site-office PC: the next person must not see the last one's name, not even while the
+  // sign-in page loads.
+  const context = await browser.newContext({ viewport: viewports.desktop, serviceWorkers: 'block' });
+  try {
+    const page = await context.newPage();
+    await signIn(page, demoUsers.technician);
+    const name = (await page.request.get('/api/auth/me').then((r) => r.json()) as { user: { name: string } }).user.name;
+    await expect(page.getByText(name, { exact: true }).first()).toBeVisible();
+
+    // Watches every document of this tab from here on: the signed-in page now, then each one loaded
+    // after it. Findings go to sessionStorage, which outlives the page that wrote them.
+    const watch = (oldName: string) => {
+      const report = (what: string) => {
+        const seen = JSON.parse(sessionStorage.getItem('seenName') ?? '[]') as string[];
+        sessionStorage.setItem('seenName', JSON.stringify([...seen, `${location.pathname}: ${what}`]));
+      };
+      const hasName = () => (document.body?.textContent ?? '').includes(oldName);
+      // The signed-in page counts from the press on sign out; a page loaded later, from its start.
+      let isArmed = !hasName();
+      new MutationObserver((records) => {
+        if (!isArmed) return;
+        for (const record of records)
+          for (const node of record.addedNodes)
+            if ((node.textContent ?? '').includes(oldName)) report(`${node.nodeName} added`);
+      }).observe(document, { childList: true, subtree: true, characterData: true });
+      addEventListener('pointerdown', () => (isArmed = true), { capture: true });
+      // Whether the name was still on screen when the page went away, that is, when the sign-in
+      // page had arrived (seconds, on a slow connection).
+      addEventListener('pagehide', () => {
+        if (isArmed && hasName()) report('still on screen when the page went away');
+      });
+    };
+    await page.addInitScript(watch, name);
+    await page.evaluate(watch, name);
+
+    await page.getByRole('button', { name: 'Sign out' }).filter({ visible: true }).click();
+    await expect(page).toHaveURL(/\/sign-in$/);
+    await expect(page.getByLabel('E-mail')).toBeVisible();
+    await page.waitForLoadState('networkidle');
+    await expect(page.getByText(name)).toHaveCount(0);
+    const seen = await page.evaluate(() => JSON.parse(sessionStorage.getItem('seenName') ?? '[]') as string[]);
+    expect(seen, `where "${name}" was seen after pressing sign out`).toEqual([]);
+  } finally {
+    await context.close();
+  }
+});

@@ -170,3 +170,69 @@ test('dispatcher opens and dispatches a two-string ticket; technician starts and
   await supervisor.screenshot({ path: screenshotPath('work-orders-ticket-supervisor-1280'), fullPage: true });
   await supervisor.context().close();
 });
+
+test('focus stays on the same row when the board switches between table and cards at 768 px', async ({
+  browser,
+  baseURL,
+}) => {
+  const dispatcher = await newPage(browser, baseURL, { viewport: viewports.desktop });
+  await signIn(dispatcher, demoUsers.dispatcher, undefined, '/work-orders');
+  const table = dispatcher.getByRole('table', { name: 'Work orders' });
+  const cards = dispatcher.getByRole('list', { name: 'Work orders' });
+  await expect(table.getByRole('row').nth(3)).toBeVisible();
+
+  /** The focused element: whether it is inside the board, its row's id, and what it is. */
+  const focused = () =>
+    dispatcher.evaluate(() => {
+      const el = document.activeElement;
+      const board = document.querySelector('table, ul[aria-label="Work orders"]');
+      return {
+        isInBoard: Boolean(el && board?.contains(el)),
+        rowId: el?.closest('[data-row-id]')?.getAttribute('data-row-id') ?? null,
+        href: el?.getAttribute('href') ?? null,
+        type: el?.getAttribute('type') ?? null,
+        tag: el?.tagName ?? null,
+      };
+    });
+
+  // A row's ticket link, by keyboard as a person would reach it.
+  const link = table.getByRole('row').nth(3).getByRole('link');
+  await link.focus();
+  const before = await focused();
+  expect(before.isInBoard).toBe(true);
+  expect(before.href).toMatch(/^\/work-orders\/\d+$/);
+
+  await dispatcher.setViewportSize({ width: 700, height: 900 });
+  await expect(cards).toBeVisible();
+  await expect(table).toHaveCount(0);
+  expect(await focused(), 'the same ticket link in the card layout').toEqual(before);
+
+  await dispatcher.setViewportSize(viewports.desktop);
+  await expect(table).toBeVisible();
+  expect(await focused(), 'the same ticket link back in the table').toEqual(before);
+
+  // Another control of another row: the row's selection checkbox.
+  const checkbox = table.getByRole('row').nth(5).getByRole('checkbox');
+  await checkbox.focus();
+  const checkboxBefore = await focused();
+  expect(checkboxBefore).toMatchObject({ isInBoard: true, type: 'checkbox' });
+  await dispatcher.setViewportSize({ width: 700, height: 900 });
+  await expect(cards).toBeVisible();
+  expect(await focused(), 'the same checkbox in the card layout').toEqual(checkboxBefore);
+
+  // A control with no twin (a column's sort button exists in the table only): the board keeps focus.
+  await dispatcher.setViewportSize(viewports.desktop);
+  await table.getByRole('button', { name: /^Deadline/ }).focus();
+  await dispatcher.setViewportSize({ width: 700, height: 900 });
+  await expect(cards).toBeVisible();
+  expect(
+    await dispatcher.evaluate(() => {
+      const el = document.activeElement;
+      return Boolean(
+        el && el !== document.body && el.contains(document.querySelector('ul[aria-label="Work orders"]')),
+      );
+    }),
+    'focus on the board’s container',
+  ).toBe(true);
+  await dispatcher.context().close();
+});

@@ -28,15 +28,31 @@ export function ProtectedLayout() {
   // The answer about the session decides whether the whole app (frame and page) is drawn. TanStack's
   // updates render synchronously; through deferred values that first drawing is a background render
   // that React does in short slices, so the main thread stays free for input while it mounts.
-  const status = useDeferredValue(me.status);
-  const fetchStatus = useDeferredValue(me.fetchStatus);
-  const data = useDeferredValue(me.data);
-  const error = useDeferredValue(me.error);
-  const view = sessionView({ status, fetchStatus, data, error }, useDeferredValue(isOnline));
+  const deferred = {
+    status: useDeferredValue(me.status),
+    fetchStatus: useDeferredValue(me.fetchStatus),
+    data: useDeferredValue(me.data),
+    error: useDeferredValue(me.error),
+  };
+  const deferredIsOnline = useDeferredValue(isOnline);
+  // Never deferred once the person is gone (signed out, the session ended elsewhere) or another one
+  // is: the deferred copy would draw the last person's frame and page once more.
+  const isPersonGone = !me.data || (deferred.data != null && deferred.data.id !== me.data.id);
+  const view = isPersonGone
+    ? sessionView({ status: me.status, fetchStatus: me.fetchStatus, data: me.data, error: me.error }, isOnline)
+    : sessionView(deferred, deferredIsOnline);
 
   if (view.kind === 'loading') return <SessionLoading />;
   if (view.kind === 'error') return <SessionError error={view.error} onRetry={() => void me.refetch()} isRetrying={me.isFetching} />;
-  if (view.kind === 'signed-out') return <Navigate to={paths.signIn(`${location.pathname}${location.search}${location.hash}`)} replace />;
+  if (view.kind === 'signed-out') {
+    // The loading frame, not a blank page, while the sign-in page's code loads.
+    return (
+      <>
+        <SessionLoading />
+        <Navigate to={paths.signIn(`${location.pathname}${location.search}${location.hash}`)} replace />
+      </>
+    );
+  }
 
   const notice = view.isSaved ? <OfflineNotice onRetry={() => void me.refetch()} isRetrying={me.isFetching} /> : null;
 

@@ -7,7 +7,7 @@ import {
   type RowData,
   type SortingState,
 } from '@tanstack/react-table';
-import type { ReactNode } from 'react';
+import { useLayoutEffect, useRef, type FocusEvent, type ReactNode } from 'react';
 import { cn } from '@/lib/cn';
 import { useMediaQuery } from '@/lib/use-media-query';
 import { Icon } from './icon';
@@ -50,6 +50,7 @@ type DataTableProps<T> = {
  * in the URL. Below 768 px each row becomes a card of label/value pairs, readable on a phone without
  * sideways scrolling. Only the layout on screen is rendered (drawing both and letting CSS hide one
  * doubles the DOM a phone builds for its first page); it switches when the window crosses 768 px.
+ * Focus survives the switch: the same control of the same row is focused in the new layout.
  */
 export function DataTable<T>({
   columns,
@@ -77,6 +78,7 @@ export function DataTable<T>({
     onSortingChange,
   });
   const isTable = useMediaQuery(tableQuery);
+  const { containerRef, onFocus, onBlur } = useFocusAcrossLayouts(isTable);
 
   if (isLoading) {
     return (
@@ -102,7 +104,15 @@ export function DataTable<T>({
   const rows = table.getRowModel().rows;
 
   return (
-    <div aria-busy={isFetching || undefined} className={cn('transition-opacity', isFetching && 'opacity-60')}>
+    <div
+      ref={containerRef}
+      // Only a fallback target for focus after a layout switch (see useFocusAcrossLayouts), never a tab stop.
+      tabIndex={-1}
+      onFocus={onFocus}
+      onBlur={onBlur}
+      aria-busy={isFetching || undefined}
+      className={cn('transition-opacity outline-none', isFetching && 'opacity-60')}
+    >
       {isTable ? (
         /* Desktop and tablet: a real table. */
         <div className="overflow-x-auto rounded-card border border-line bg-surface shadow-card">
@@ -147,14 +157,14 @@ export function DataTable<T>({
             </thead>
             <tbody>
               {rows.map((row) => (
-                <tr key={row.id} className="border-b border-line last:border-b-0 hover:bg-paper/70">
+                <tr key={row.id} data-row-id={row.id} className="border-b border-line last:border-b-0 hover:bg-paper/70">
                   {row.getVisibleCells().map((cell) =>
                     cell.column.columnDef.meta?.isRowHeader ? (
-                      <th key={cell.id} scope="row" className={cn('px-4 py-3 align-middle font-normal', cell.column.columnDef.meta.className)}>
+                      <th key={cell.id} data-column-id={cell.column.id} scope="row" className={cn('px-4 py-3 align-middle font-normal', cell.column.columnDef.meta.className)}>
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       </th>
                     ) : (
-                      <td key={cell.id} className={cn('px-4 py-3 align-middle', cell.column.columnDef.meta?.className)}>
+                      <td key={cell.id} data-column-id={cell.column.id} className={cn('px-4 py-3 align-middle', cell.column.columnDef.meta?.className)}>
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       </td>
                     ),
@@ -174,22 +184,28 @@ export function DataTable<T>({
             const labelledCells = cells.filter((cell) => !cell.column.columnDef.meta?.isCardTitle && cell.column.columnDef.meta?.label);
             const restCells = cells.filter((cell) => !cell.column.columnDef.meta?.isCardTitle && !cell.column.columnDef.meta?.label);
             return (
-              <li key={row.id} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4 shadow-card">
+              <li key={row.id} data-row-id={row.id} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4 shadow-card">
                 {titleCells.map((cell) => (
-                  <div key={cell.id}>{render(cell)}</div>
+                  <div key={cell.id} data-column-id={cell.column.id}>
+                    {render(cell)}
+                  </div>
                 ))}
                 {labelledCells.length > 0 ? (
                   <dl className="flex flex-col gap-2">
                     {labelledCells.map((cell) => (
                       <div key={cell.id} className="flex items-baseline justify-between gap-4">
                         <dt className="text-sm text-ink-muted">{cell.column.columnDef.meta?.label}</dt>
-                        <dd className="text-right">{render(cell)}</dd>
+                        <dd data-column-id={cell.column.id} className="text-right">
+                          {render(cell)}
+                        </dd>
                       </div>
                     ))}
                   </dl>
                 ) : null}
                 {restCells.map((cell) => (
-                  <div key={cell.id}>{render(cell)}</div>
+                  <div key={cell.id} data-column-id={cell.column.id}>
+                    {render(cell)}
+                  </div>
                 ))}
               </li>
             );
@@ -202,3 +218,88 @@ export function DataTable<T>({
 
 /** Tailwind's `md:` breakpoint, from which rows are a table rather than cards. */
 const tableQuery = '(min-width: 48rem)';
+
+/** Where focus was inside the table: the element itself, and how to find its twin in the other layout. */
+type FocusSpot = {
+  element: Element;
+  rowId: string | null;
+  columnId: string | null;
+  /** Its position among the focusable elements of its cell (or of its row, without a cell). */
+  index: number;
+};
+
+const focusableSelector = 'a[href], button, input, select, textarea, [tabindex]:not([tabindex="-1"])';
+
+function focusablesIn(scope: Element): HTMLElement[] {
+  return [...scope.querySelectorAll<HTMLElement>(focusableSelector)].filter((el) => !el.matches(':disabled'));
+}
+
+function spotOf(element: Element, container: Element): FocusSpot {
+  const row = element.closest('[data-row-id]');
+  const cell = element.closest('[data-column-id]');
+  const scope = (row && container.contains(row) ? cell ?? row : null) ?? container;
+  return {
+    element,
+    rowId: row && container.contains(row) ? row.getAttribute('data-row-id') : null,
+    columnId: cell && row?.contains(cell) ? cell.getAttribute('data-column-id') : null,
+    index: focusablesIn(scope).indexOf(element as HTMLElement),
+  };
+}
+
+/** Focuses `el` if it can take focus (a control hidden in this layout cannot); says whether it did. */
+function tryFocus(el: HTMLElement | null | undefined): boolean {
+  if (!el) return false;
+  el.focus();
+  return document.activeElement === el;
+}
+
+/** The matching control in the layout now on screen: same row and cell, else the row's first control. */
+function restoreFocus(container: HTMLElement, spot: FocusSpot) {
+  const row = spot.rowId === null ? null : [...container.querySelectorAll('[data-row-id]')].find((r) => r.getAttribute('data-row-id') === spot.rowId);
+  if (row) {
+    const cell = spot.columnId === null ? null : [...row.querySelectorAll('[data-column-id]')].find((c) => c.getAttribute('data-column-id') === spot.columnId);
+    const inCell = cell ? focusablesIn(cell) : [];
+    if (tryFocus(inCell[spot.index]) || inCell.some(tryFocus)) return;
+    if (focusablesIn(row).some(tryFocus)) return;
+  }
+  container.focus({ preventScroll: true });
+}
+
+/**
+ * The two layouts share no DOM, so crossing 768 px (turning a tablet, resizing a window, zooming)
+ * removes the focused control and the browser drops focus to the page's start. This remembers where
+ * focus was in the table and, right after the switch, focuses the same row's same control in the new
+ * layout (or the table itself when that control has no twin, e.g. a column's sort button).
+ */
+function useFocusAcrossLayouts(isTable: boolean) {
+  const containerRef = useRef<HTMLDivElement>(null);
+  const spot = useRef<FocusSpot | null>(null);
+  const shownLayout = useRef(isTable);
+
+  const onFocus = (event: FocusEvent<HTMLDivElement>) => {
+    spot.current = event.target === event.currentTarget ? null : spotOf(event.target, event.currentTarget);
+  };
+  const onBlur = (event: FocusEvent<HTMLDivElement>) => {
+    if (event.relatedTarget && event.currentTarget.contains(event.relatedTarget)) return;
+    // A blur because the element was removed (the layout switch) keeps the spot; a real blur (focus
+    // moved elsewhere, or a click on the page) forgets it. Only after the commit can they be told apart.
+    const left = spot.current;
+    queueMicrotask(() => {
+      if (spot.current === left && left?.element.isConnected) spot.current = null;
+    });
+  };
+
+  useLayoutEffect(() => {
+    if (shownLayout.current === isTable) return;
+    shownLayout.current = isTable;
+    const container = containerRef.current;
+    const last = spot.current;
+    spot.current = null;
+    if (!container || !last || last.element.isConnected) return;
+    // Only when focus was really lost with the old layout, not taken by something else meanwhile.
+    if (document.activeElement && document.activeElement !== document.body && document.activeElement !== container) return;
+    restoreFocus(container, last);
+  }, [isTable]);
+
+  return { containerRef, onFocus, onBlur };
+}

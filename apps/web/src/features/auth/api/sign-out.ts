@@ -1,25 +1,36 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api, clearCsrfToken } from '@/lib/api-client';
 import { paths } from '@/config/paths';
+import { authKeys } from './keys';
 
 export async function signOut(): Promise<void> {
   await api.post('/api/auth/logout');
 }
 
 /**
+ * Forgets everything of the person who signed out, then reloads into the sign-in page. The session
+ * is set to nobody before the cache is cleared: clear() alone drops the answers without telling the
+ * components that show them, so the person's frame and page would stay on screen until the sign-in
+ * page arrives (seconds on a slow connection); told, the protected layout swaps them for the loading
+ * frame at once.
+ */
+function forgetPerson(queryClient: QueryClient) {
+  clearCsrfToken();
+  queryClient.setQueryData(authKeys.me(), null);
+  queryClient.clear();
+  window.location.replace(paths.signIn());
+}
+
+/**
  * Signs out, then reloads into the sign-in page: crew phones and site-office PCs are shared, so
- * nothing of the last person's data may stay in memory.
+ * nothing of the last person's data may stay in memory, nor on screen.
  */
 export function useSignOut() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: signOut,
-    onSettled: () => {
-      clearCsrfToken();
-      queryClient.clear();
-      window.location.replace(paths.signIn());
-    },
+    onSettled: () => forgetPerson(queryClient),
   });
 }
 
@@ -34,10 +45,6 @@ export function useSignOutEverywhere() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: signOutEverywhere,
-    onSuccess: () => {
-      clearCsrfToken();
-      queryClient.clear();
-      window.location.replace(paths.signIn());
-    },
+    onSuccess: () => forgetPerson(queryClient),
   });
 }

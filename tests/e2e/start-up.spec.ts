@@ -1,0 +1,68 @@
+import AxeBuilder from '@axe-core/playwright';
+import { expect, test } from '@playwright/test';
+import { demoUsers, screenshotPath, signIn, viewports } from './helpers.ts';
+
+// The staged start-up (apps/web/src/main.tsx) loads the app's code in steps; a step whose file does
+// not arrive (gone after a release, the connection dropping) must end in a message with a way on, not
+// in a loading frame that never changes. The same for the background check queue sync: its file
+// failing leaves the page usable.
+
+test.use({ viewport: viewports.phone, serviceWorkers: 'block' });
+
+test('a start-up file that does not arrive ends in a message with a Reload button, and Reload starts the app', async ({
+  page,
+}) => {
+  const errors: string[] = [];
+  page.on('pageerror', (error) => errors.push(error.message));
+  // The app start-up chunk (src/app/start.tsx: providers, router), asked for by main.tsx's second step.
+  await page.route(/\/assets\/start-[\w-]+\.js$/, (route) => route.abort('internetdisconnected'));
+  await page.goto('/sign-in');
+
+  const alert = page.getByRole('alert').filter({ hasText: 'Stringfield did not start' });
+  await expect(alert).toBeVisible();
+  await expect(alert).toContainText('Part of the app did not download');
+  const reload = alert.getByRole('button', { name: 'Reload' });
+  await expect(reload).toBeVisible();
+  await expect(reload).toBeFocused();
+  // A thumb-sized target on a phone.
+  const box = await reload.boundingBox();
+  expect(box?.height ?? 0).toBeGreaterThanOrEqual(48);
+  expect(box?.width ?? 0).toBeGreaterThanOrEqual(48);
+  // No longer announced as loading.
+  await expect(page.getByRole('status', { name: /loading/i })).toHaveCount(0);
+  await expect(page.getByText('Loading Stringfield')).toHaveCount(0);
+  expect(errors, 'the failure is handled, not an uncaught rejection').toEqual([]);
+
+  const axe = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
+  expect(axe.violations.map((v) => `${v.id}: ${v.help}`)).toEqual([]);
+  await page.screenshot({ path: screenshotPath('start-up-failure-360') });
+
+  // The file is there again: Reload starts the app.
+  await page.unroute(/\/assets\/start-[\w-]+\.js$/);
+  await reload.click();
+  await expect(page.getByLabel('E-mail')).toBeVisible();
+  await expect(page.getByRole('alert').filter({ hasText: 'Stringfield did not start' })).toHaveCount(0);
+});
+
+test('the technician’s pages keep working when the check queue sync does not load', async ({ page }) => {
+  await page.route(/\/assets\/check-queue-sync-[\w-]+\.js$/, (route) => route.abort('internetdisconnected'));
+  await signIn(page, demoUsers.technician);
+
+  // The failure has happened (and was caught) once the notice shows; the page is still the page.
+  const notice = page
+    .getByRole('status')
+    .filter({ hasText: 'Saved checks are not sent until the app reloads' });
+  await expect(notice).toBeVisible();
+  await expect(notice.getByRole('button', { name: 'Reload' })).toBeVisible();
+  await expect(page.getByText('This page ran into a problem')).toHaveCount(0);
+  await expect(page.getByRole('main').getByRole('heading', { level: 1 })).toBeVisible();
+  await page.screenshot({ path: screenshotPath('check-queue-sync-failure-360') });
+  // The navigation still works around it.
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .filter({ visible: true })
+    .getByRole('link', { name: 'Work orders' })
+    .click();
+  await expect(page).toHaveURL(/\/work-orders/);
+  await expect(page.getByText('This page ran into a problem')).toHaveCount(0);
+});
