@@ -21,9 +21,9 @@ const token = (name: string, fallback: string) => new RegExp(`--color-${name}:\\
  * imports dynamically on every start (src/app/start.tsx and what it needs), so they download in
  * parallel with the entry instead of after it has run.
  */
-function preloadStartChunks(entries: RegExp): Plugin {
+function preloadStartChunks(entries: RegExp, options: { name?: string; fetchPriority?: 'low' } = {}): Plugin {
   return {
-    name: 'stringfield:preload-start-chunks',
+    name: `stringfield:preload-${options.name ?? 'start-chunks'}`,
     apply: 'build',
     transformIndexHtml: {
       order: 'post',
@@ -40,7 +40,11 @@ function preloadStartChunks(entries: RegExp): Plugin {
         for (const [file, chunk] of chunks) if (chunk.facadeModuleId && entries.test(chunk.facadeModuleId)) add(file);
         return [...files]
           .filter((file) => !html.includes(`/${file}"`))
-          .map((file) => ({ tag: 'link', attrs: { rel: 'modulepreload', crossorigin: true, href: `/${file}` }, injectTo: 'head' as const }));
+          .map((file) => ({
+            tag: 'link',
+            attrs: { rel: 'modulepreload', crossorigin: true, ...(options.fetchPriority ? { fetchpriority: options.fetchPriority } : {}), href: `/${file}` },
+            injectTo: 'head' as const,
+          }));
       },
     },
   };
@@ -110,6 +114,9 @@ export default defineConfig({
   plugins: [
     react(),
     preloadStartChunks(/[\\/]src[\\/]app[\\/]start\.tsx$/),
+    // The toaster mounts once the first page has settled (app/provider.tsx), but its code is fetched now, at
+    // low priority: a phone that loses signal in between still shows its toasts ("Kept on this phone").
+    preloadStartChunks(/[\\/]src[\\/]components[\\/]ui[\\/]app-toaster\.tsx$/, { name: 'toaster', fetchPriority: 'low' }),
     firstPagesManifest(),
     brotliCopies(),
     tailwindcss(),

@@ -62,7 +62,7 @@ describe('the built web app', () => {
   it('lists a first page’s scripts and the session lookup as preloads in its HTML, and nothing extra elsewhere', async () => {
     const board = await supertest(app).get('/work-orders').expect(200);
     expect(board.headers['content-type']).toMatch(/^text\/html/);
-    expect(board.text).toContain('<link rel="modulepreload" crossorigin href="/assets/work-orders-def456.js">');
+    expect(board.text).toContain('<link rel="modulepreload" crossorigin fetchpriority="low" href="/assets/work-orders-def456.js">');
     expect(board.text).toContain('<link rel="preload" as="fetch" crossorigin href="/api/auth/me">');
     // Already in the HTML as the entry script: not listed twice.
     expect(board.text).not.toContain('modulepreload" crossorigin href="/assets/index-abc123.js"');

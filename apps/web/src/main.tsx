@@ -3,6 +3,7 @@ import '@fontsource-variable/inter';
 import '@fontsource-variable/space-grotesk';
 import './styles.css';
 import { startMeEarly } from '@/features/auth/api/get-me';
+import { afterPageSettles } from '@/lib/after-load';
 import { toast } from '@/lib/toast';
 import { registerSW } from 'virtual:pwa-register';
 import { preloadFirstPage } from './app/first-page';
@@ -43,8 +44,8 @@ function nextTask(): Promise<void> {
 
 // The service worker exists only in a production build. A new release takes over at once; the page
 // reloads into it, except on a field page where a reading may be half typed: there it asks first.
-// Registered after the page has loaded, so the worker's precache downloads do not compete with the
-// first page's code and data on a slow connection.
+// Registered a few seconds after the page has loaded, so the worker and its precache downloads do not
+// compete with the first page's code and data on a slow connection.
 function registerServiceWorker() {
   registerSW({
     immediate: true,
@@ -62,7 +63,4 @@ function registerServiceWorker() {
   });
 }
 
-if (import.meta.env.PROD) {
-  if (document.readyState === 'complete') registerServiceWorker();
-  else window.addEventListener('load', registerServiceWorker, { once: true });
-}
+if (import.meta.env.PROD) afterPageSettles(registerServiceWorker, 3_000);

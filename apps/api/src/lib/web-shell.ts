@@ -28,10 +28,12 @@ export function webShell(webDist: string): RequestHandler {
     } catch {
       // An older or hand-made build: every address gets the plain HTML.
     }
+    // Low priority: the browser fetches the page's code early but after what paints the frame (the styles,
+    // the fonts, the app's own start-up code), which a phone's first paint waits on.
     const withPreloads = (files: string[]) => {
       const links = files
         .filter((file) => /^assets\/[\w.-]+\.js$/.test(file) && !plain.includes(`/${file}"`))
-        .map((file) => `<link rel="modulepreload" crossorigin href="/${file}">`);
+        .map((file) => `<link rel="modulepreload" crossorigin fetchpriority="low" href="/${file}">`);
       // The app asks who is signed in before anything else; same URL, mode and credentials as its fetch.
       links.push('<link rel="preload" as="fetch" crossorigin href="/api/auth/me">');
       return plain.replace('</head>', `${links.join('')}</head>`);

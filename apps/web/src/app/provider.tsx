@@ -2,9 +2,10 @@ import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persi
 import { onlineManager, type QueryClient } from '@tanstack/react-query';
 import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
 import { del, get, set } from 'idb-keyval';
-import { lazy, Suspense, useState, type ReactNode } from 'react';
+import { lazy, Suspense, useEffect, useState, type ReactNode } from 'react';
 import type { SessionUser } from '@stringfield/shared';
 import { authKeys } from '@/features/auth/api/keys';
+import { afterPageSettles } from '@/lib/after-load';
 import { createQueryClient } from '@/lib/query-client';
 import {
   createCacheOwner,
@@ -17,7 +18,9 @@ import {
   type KeyValueStore,
 } from '@/lib/query-persistence';
 
-// Toasts only follow something a person did; the toaster (and Sonner) load after the first page.
+// Toasts only follow something a person did; the toaster (and Sonner) mount once the first page has
+// settled (a toast asked for before then waits for it, see lib/toast.ts). Its code is preloaded at low
+// priority from index.html (vite.config.ts), so it is there even if the signal goes in between.
 const AppToaster = lazy(async () => ({ default: (await import('@/components/ui/app-toaster')).AppToaster }));
 
 const idb: KeyValueStore = { get: (key) => get(key), set: (key, value) => set(key, value), del: (key) => del(key) };
@@ -54,6 +57,8 @@ export function AppProvider({ children }: { children: ReactNode }) {
     });
     return { queryClient: client, persister: setUpPersistence(client) };
   });
+  const [hasToaster, setHasToaster] = useState(false);
+  useEffect(() => afterPageSettles(() => setHasToaster(true), 1_000), []);
 
   return (
     <PersistQueryClientProvider
@@ -67,9 +72,11 @@ export function AppProvider({ children }: { children: ReactNode }) {
       }}
     >
       {children}
-      <Suspense fallback={null}>
-        <AppToaster />
-      </Suspense>
+      {hasToaster ? (
+        <Suspense fallback={null}>
+          <AppToaster />
+        </Suspense>
+      ) : null}
     </PersistQueryClientProvider>
   );
 }
