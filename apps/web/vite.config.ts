@@ -63,7 +63,9 @@ function firstPagesManifest(): Plugin {
     generateBundle(_options, bundle) {
       const text = readFileSync(source, 'utf8');
       const pages = [...text.matchAll(/\[\/(.+?)\/,\s*\(\) => import\('\.\/(routes\/[\w-]+)'\)\]/g)].map(([, pattern, route]) => ({ pattern: pattern!, route: route! }));
-      if (pages.length === 0) this.error(`no first pages found in ${source}`);
+      // Every page listed there must be read here, or one would silently go without its preloads.
+      const listed = text.match(/import\('\.\/routes\//g)?.length ?? 0;
+      if (pages.length === 0 || pages.length !== listed) this.error(`read ${pages.length} of the ${listed} first pages in ${source}; keep each as [/pattern/, () => import('./routes/…')]`);
       const chunks = Object.values(bundle).filter((o) => o.type === 'chunk');
       const byFile = new Map(chunks.map((c) => [c.fileName, c]));
       const closure = (file: string, seen: Set<string>) => {

@@ -33,7 +33,8 @@ async function writeWhileLeavingField(ticketId: number, write: () => PromiseLike
   const t = await sequelize.transaction();
   await WorkOrder.findByPk(ticketId, { transaction: t, lock: t.LOCK.UPDATE });
   const pending = Promise.resolve(write());
-  await someoneWaits(t);
+  // The evidence write's lock on the ticket, or (without it) its insert's foreign key check.
+  await someoneWaits(t, /work_orders|INSERT INTO `(string_checks|diode_replacements)`/);
   await WorkOrder.update({ status: 'awaiting_signoff' }, { where: { id: ticketId }, transaction: t });
   await t.commit();
   return pending;
@@ -69,7 +70,7 @@ describe('evidence racing a ticket out of the field', () => {
         .send({ stringId, modulePosition: 2, diodePosition: 1, failureMode: 'short', foundBy: 'voc_deficit', installedPart: { partNumber: 'SBD-15A45V', ratingA: 15, ratingV: 45, type: 'schottky' } }),
     );
     expect(res.status).toBe(409);
-    expect(errorOf(res).message).toMatch(/left the field/);
+    expect(errorOf(res).message).toMatch(/now, so nothing was added/);
     expect(await DiodeReplacement.count({ where: { workOrderId: id } })).toBe(0);
   });
 });

@@ -116,16 +116,22 @@ export function errorOf(res: { body: unknown }) {
   return (res.body as { error: { code: string; message: string; fields?: Record<string, string> } }).error;
 }
 
-/** Resolves once another connection of this database is running a statement (a request now waiting on a lock). */
-export async function someoneWaits(transaction: Transaction): Promise<void> {
+/**
+ * Resolves once another connection of this database has been running a statement matching `statement` for
+ * over 100 ms: a request stuck behind a lock (a passing query, such as mail delivery's, is gone by then).
+ */
+export async function someoneWaits(transaction: Transaction, statement: RegExp): Promise<void> {
   const deadline = Date.now() + 10_000;
+  let seen = new Map<number, string>();
   while (Date.now() < deadline) {
-    const [row] = await sequelize.query<{ n: number }>(
-      "SELECT COUNT(*) AS n FROM information_schema.PROCESSLIST WHERE DB = DATABASE() AND COMMAND = 'Query' AND ID <> CONNECTION_ID()",
+    const rows = await sequelize.query<{ id: number; info: string | null }>(
+      "SELECT ID AS id, INFO AS info FROM information_schema.PROCESSLIST WHERE DB = DATABASE() AND COMMAND = 'Query' AND ID <> CONNECTION_ID()",
       { type: QueryTypes.SELECT, transaction },
     );
-    if (Number(row!.n) > 0) return;
-    await new Promise((r) => setTimeout(r, 20));
+    const now = new Map(rows.filter((r) => r.info && statement.test(r.info)).map((r) => [Number(r.id), r.info!]));
+    if ([...now].some(([id, info]) => seen.get(id) === info)) return;
+    seen = now;
+    await new Promise((r) => setTimeout(r, 100));
   }
-  throw new Error('the request never reached the database');
+  throw new Error(`no request waited on the database with a statement like ${statement}`);
 }

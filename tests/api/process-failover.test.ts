@@ -211,9 +211,12 @@ describe('a process told to stop (SIGTERM)', () => {
         `Content-Type: application/json\r\nContent-Length: ${Buffer.byteLength(body)}\r\n\r\n${body}` +
         `GET /api/health HTTP/1.1\r\nHost: 127.0.0.1\r\n\r\n`,
     );
-    await someoneWaits(t);
+    await someoneWaits(t, /UPDATE `users`/);
     c.child.kill('SIGTERM');
-    await new Promise((r) => setTimeout(r, 300));
+    // Released once the process has begun to drain: it takes no new connection then.
+    await expect
+      .poll(() => fetch(`${c.base}/api/health`).then(() => 'still listening', () => 'draining'), { timeout: 10_000 })
+      .toBe('draining');
     await t.rollback();
     await once(socket, 'close');
     const [code] = (await once(c.child, 'exit')) as [number | null];

@@ -57,6 +57,22 @@ describe('the built web app', () => {
     expect(res.text).toBe(script); // supertest decodes brotli too
     const gzip = await supertest(app).get('/assets/index-abc123.js').set('Accept-Encoding', 'gzip').expect(200);
     expect(gzip.headers['content-encoding']).toBe('gzip');
+    const refused = await supertest(app).get('/assets/index-abc123.js').set('Accept-Encoding', 'gzip, br;q=0').expect(200);
+    expect(refused.headers['content-encoding']).toBe('gzip');
+    // A byte range of the compressed copy would mean nothing to the browser: the whole file, compressed.
+    const ranged = await supertest(app).get('/assets/index-abc123.js').set('Accept-Encoding', 'br').set('Range', 'bytes=999999-').expect(200);
+    expect(ranged.headers['content-encoding']).toBe('br');
+    expect(ranged.text).toBe(script);
+  });
+
+  it('sends the plain file, not a brotli copy older than it', async () => {
+    const stale = path.join(dist, 'assets/stale-abc123.js');
+    fs.writeFileSync(stale, script);
+    fs.writeFileSync(`${stale}.br`, zlib.brotliCompressSync('export const old = true;\n'));
+    const before = new Date(Date.now() - 60_000);
+    fs.utimesSync(`${stale}.br`, before, before);
+    const res = await supertest(app).get('/assets/stale-abc123.js').set('Accept-Encoding', 'gzip, br').expect(200);
+    expect(res.text).toBe(script);
   });
 
   it('lists a first page’s scripts and the session lookup as preloads in its HTML, and nothing extra elsewhere', async () => {
@@ -65,7 +81,8 @@ describe('the built web app', () => {
     expect(board.text).toContain('<link rel="modulepreload" crossorigin fetchpriority="low" href="/assets/work-orders-def456.js">');
     expect(board.text).toContain('<link rel="preload" as="fetch" crossorigin href="/api/auth/me">');
     // Already in the HTML as the entry script: not listed twice.
-    expect(board.text).not.toContain('modulepreload" crossorigin href="/assets/index-abc123.js"');
+    expect(board.text.split('href="/assets/index-abc123.js"')).toHaveLength(1);
+    expect(board.text.split('src="/assets/index-abc123.js"')).toHaveLength(2);
     const other = await supertest(app).get('/sites/3').expect(200);
     expect(other.text).toBe(indexHtml);
   });

@@ -74,6 +74,9 @@ async function shutdown(signal: string) {
   await step('waiting for requests', async () => {
     if (!(await requestsSettled(deadline))) logger.warn({ inFlight: requestsInFlight() }, 'requests still running at shutdown; closing anyway');
     if (!(await databaseQuiet(200, Math.max(0, deadline - Date.now())))) logger.warn('database work still running at shutdown; closing anyway');
+    // With `Connection: close` on every answer, each socket closes once its answer is flushed; what is
+    // still open at the deadline (a client that reads too slowly, an idle socket) is closed then.
+    await Promise.race([closed, new Promise((resolve) => setTimeout(resolve, Math.max(0, deadline - Date.now())))]);
     server.closeAllConnections();
     await closed;
   });

@@ -18,13 +18,15 @@ type Shell = { mtimeMs: number; plain: string; pages: Array<{ pattern: RegExp; h
 export function webShell(webDist: string): RequestHandler {
   const indexFile = path.join(webDist, 'index.html');
   let shell: Shell | null = null;
+  const firstPagesFile = path.join(webDist, 'first-pages.json');
   const load = (): Shell => {
-    const { mtimeMs } = fs.statSync(indexFile);
+    // Both files: a request in the middle of a build must not keep a half-written list.
+    const mtimeMs = fs.statSync(indexFile).mtimeMs + (fs.existsSync(firstPagesFile) ? fs.statSync(firstPagesFile).mtimeMs : 0);
     if (shell?.mtimeMs === mtimeMs) return shell;
     const plain = fs.readFileSync(indexFile, 'utf8');
     let firstPages: FirstPage[] = [];
     try {
-      firstPages = JSON.parse(fs.readFileSync(path.join(webDist, 'first-pages.json'), 'utf8')) as FirstPage[];
+      firstPages = JSON.parse(fs.readFileSync(firstPagesFile, 'utf8')) as FirstPage[];
     } catch {
       // An older or hand-made build: every address gets the plain HTML.
     }
@@ -52,21 +54,37 @@ const precompressedTypes: Record<string, string> = { '.js': 'text/javascript; ch
 
 /**
  * Scripts and styles brotli-compressed by the build (a `.br` beside each): sent as they are to a browser
- * that takes brotli — smaller than gzip and no compression work per request. Others get the plain file.
+ * that takes brotli — smaller than gzip and no compression work per request. Anything else, or a `.br`
+ * older than its file, goes on to the plain file (compressed on the fly as before).
  */
 export function precompressedAssets(webDist: string): RequestHandler {
   const assets = path.join(webDist, 'assets');
   return (req, res, next) => {
     const type = precompressedTypes[path.extname(req.path)];
-    if (!type || !req.path.startsWith('/assets/') || !/\bbr\b/.test(req.headers['accept-encoding'] ?? '')) return next();
-    const file = path.join(assets, path.basename(req.path));
-    if (`/assets/${path.basename(req.path)}` !== req.path || !fs.existsSync(`${file}.br`)) return next();
-    res.setHeader('Content-Type', type);
-    res.setHeader('Content-Encoding', 'br');
-    res.setHeader('Vary', 'Accept-Encoding');
-    res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
-    res.sendFile(`${file}.br`, (err) => {
-      if (err && !res.headersSent) next();
+    if (!type || (req.method !== 'GET' && req.method !== 'HEAD') || req.acceptsEncodings('br', 'identity') !== 'br') return next();
+    const name = path.basename(req.path);
+    if (`/assets/${name}` !== req.path) return next();
+    const file = path.join(assets, name);
+    let current = false;
+    try {
+      current = fs.statSync(`${file}.br`).mtimeMs >= fs.statSync(file).mtimeMs;
+    } catch {
+      // no plain file or no brotli copy
+    }
+    if (!current) return next();
+    const headers = {
+      'Content-Type': type,
+      'Content-Encoding': 'br',
+      Vary: 'Accept-Encoding',
+      'Cache-Control': 'public, max-age=31536000, immutable',
+    };
+    res.set(headers);
+    // Whole files only: a byte range of the compressed copy means nothing to the browser.
+    res.sendFile(`${file}.br`, { acceptRanges: false }, (err) => {
+      if (!err || res.headersSent) return;
+      // Not sent after all (unreadable, gone in a deploy): the plain file goes out without these headers.
+      for (const header of Object.keys(headers)) res.removeHeader(header);
+      next();
     });
   };
 }

@@ -37,6 +37,13 @@ function isDatabaseUnavailable(err: unknown): boolean {
   return /^(ECONNREFUSED|ER_GET_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ER_CONNECTION_ALREADY_CLOSED)$/.test(code);
 }
 
+/** Two writes met on the same records (a deadlock, or a lock held too long): nothing was saved, and a retry works. */
+function isLockConflict(err: unknown): boolean {
+  const parent = err instanceof BaseError ? (err as BaseError & { parent?: { code?: string; errno?: number } }).parent : undefined;
+  const code = parent?.code ?? (err as { code?: string } | null)?.code ?? '';
+  return code === 'ER_LOCK_DEADLOCK' || code === 'ER_LOCK_WAIT_TIMEOUT' || parent?.errno === 1213 || parent?.errno === 1205;
+}
+
 export const notFoundApi: RequestHandler = (req, _res, next) => {
   next(new AppError('NOT_FOUND', `There is no API route ${req.method} ${req.path}.`));
 };
@@ -96,6 +103,11 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   }
   if (err instanceof ForeignKeyConstraintError) {
     res.status(409).json(body('CONFLICT', 'That record is still referenced elsewhere, or refers to something missing.', rid));
+    return;
+  }
+  if (isLockConflict(err)) {
+    logger.warn({ requestId: rid, err: (err as Error).message }, 'lock conflict');
+    res.status(409).json(body('CONFLICT', 'Someone else was changing the same ticket at that moment; nothing was saved. Send it again.', rid));
     return;
   }
   if (isDatabaseUnavailable(err)) {

@@ -11,6 +11,7 @@ import {
   type PhotoMeta,
   type SessionUser,
   type ThermalFindingInput,
+  workOrderStatusLabels,
 } from '@stringfield/shared';
 import type { CreationAttributes, Transaction } from 'sequelize';
 import { z } from 'zod';
@@ -157,8 +158,14 @@ async function ticketForEvidence(user: SessionUser, workOrderId: number): Promis
  */
 export async function holdInField(workOrderId: number, transaction: Transaction): Promise<void> {
   const wo = await WorkOrder.findByPk(workOrderId, { attributes: ['id', 'number', 'status'], transaction, lock: transaction.LOCK.SHARE });
-  if (!wo || wo.status !== 'in_field') {
-    throw new AppError('CONFLICT', `${wo?.number ?? 'The ticket'} left the field while this was being saved; nothing was added.`, undefined, { status: wo?.status ?? null });
+  if (!wo) throw notFound('That work order');
+  if (wo.status !== 'in_field') {
+    throw new AppError(
+      'CONFLICT',
+      `${wo.number} is ${workOrderStatusLabels[wo.status]} now, so nothing was added. To add this, ask the dispatcher or supervisor to send the ticket back to you.`,
+      undefined,
+      { status: wo.status },
+    );
   }
 }
 
@@ -253,17 +260,17 @@ export async function uploadPhotos(user: SessionUser, workOrderId: number, files
   return photoDtos(await storePhotos(wo.id, user.id, processed, { holdInField: true }));
 }
 
-/**
- * Store processed photos: three files each, then their rows in one transaction (a savepoint when the caller
- * passes its own); a failure removes the files written, so nothing is left half done. `at` stamps the rows
- * with an upload time other than now (the demo seed writes history).
- */
 async function removeFiles(keys: string[]): Promise<void> {
   await Promise.all(
     keys.map((k) => storage.delete(k).catch((e: unknown) => logger.error({ err: (e as Error).message, key: k }, 'upload clean-up left a file behind'))),
   );
 }
 
+/**
+ * Store processed photos: three files each, then their rows in one transaction (a savepoint when the caller
+ * passes its own); a failure removes the files written, so nothing is left half done. `at` stamps the rows
+ * with an upload time other than now (the demo seed writes history).
+ */
 export async function storePhotos(
   workOrderId: number,
   uploadedById: number,
@@ -273,18 +280,23 @@ export async function storePhotos(
   const { at } = options;
   const written: string[] = [];
   try {
-    const stored = await sequelize.transaction({ ...(options.transaction ? { transaction: options.transaction } : {}) }, async (transaction) => {
+    // The files first, outside the transaction: a slow bucket must not hold the ticket's lock.
+    const stored: Array<{ p: ProcessedImage; keys: { original: string; screen: string; thumb: string } }> = [];
+    for (const p of processed) {
+      const stem = `photos/${workOrderId}/${randomUUID()}`;
+      const keys = { original: `${stem}-original.${p.originalType.split('/')[1]}`, screen: `${stem}-screen.jpg`, thumb: `${stem}-thumb.jpg` };
+      await storage.put(keys.original, p.original, p.originalType);
+      written.push(keys.original);
+      await storage.put(keys.screen, p.screen, 'image/jpeg');
+      written.push(keys.screen);
+      await storage.put(keys.thumb, p.thumb, 'image/jpeg');
+      written.push(keys.thumb);
+      stored.push({ p, keys });
+    }
+    const rows = await sequelize.transaction({ ...(options.transaction ? { transaction: options.transaction } : {}) }, async (transaction) => {
       if (options.holdInField) await holdInField(workOrderId, transaction);
       const out: Photo[] = [];
-      for (const p of processed) {
-        const stem = `photos/${workOrderId}/${randomUUID()}`;
-        const keys = { original: `${stem}-original.${p.originalType.split('/')[1]}`, screen: `${stem}-screen.jpg`, thumb: `${stem}-thumb.jpg` };
-        await storage.put(keys.original, p.original, p.originalType);
-        written.push(keys.original);
-        await storage.put(keys.screen, p.screen, 'image/jpeg');
-        written.push(keys.screen);
-        await storage.put(keys.thumb, p.thumb, 'image/jpeg');
-        written.push(keys.thumb);
+      for (const { p, keys } of stored) {
         out.push(
           await Photo.create(
             {
@@ -315,7 +327,7 @@ export async function storePhotos(
     });
     // Inside a caller's transaction the rows can still roll back after this savepoint; the files go with them.
     if (options.transaction) onRollback(options.transaction, () => removeFiles(written));
-    return stored;
+    return rows;
   } catch (err) {
     await removeFiles(written);
     throw err;

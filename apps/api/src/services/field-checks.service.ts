@@ -290,13 +290,16 @@ export async function reviseCheck(user: SessionUser, checkId: number, input: Str
     return (await toDtos([existing]))[0]!;
   }
   const created = await sequelize.transaction(async (transaction) => {
+    // The ticket first, then the check: the order every evidence write takes its locks in.
+    const ticketOf = await StringCheck.findByPk(checkId, { attributes: ['id', 'workOrderId'], transaction });
+    if (!ticketOf) throw notFound('That check');
+    const wo = await ticketForWork(user, ticketOf.workOrderId, transaction);
     const old = await StringCheck.findByPk(checkId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!old) throw notFound('That check');
     if (old.supersededById) throw new AppError('CONFLICT', 'That check was already corrected; correct the latest revision instead.');
     if (old.stringId !== input.stringId) {
       throw new AppError('VALIDATION_FAILED', 'A correction is for the same string.', { stringId: 'Same string as the original' });
     }
-    const wo = await ticketForWork(user, old.workOrderId, transaction);
     return saveCheck(user, wo, input, old, transaction);
   });
   return (await toDtos([created]))[0]!;
