@@ -1,6 +1,10 @@
 import { randomUUID } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { DiodeReplacement, StringCheck, User, WorkOrder, sequelize } from '../../apps/api/src/models/index.ts';
+import fs from 'node:fs';
+import path from 'node:path';
+import sharp from 'sharp';
+import { DiodeReplacement, Photo, StringCheck, User, WorkOrder, sequelize } from '../../apps/api/src/models/index.ts';
+import { apiTestEnv } from './test-env.ts';
 import { demoEmail, errorOf, resetDatabase, signIn, someoneWaits, type Agent } from './helpers.ts';
 
 // Evidence that reaches the server while the ticket is leaving the field (the technician hands it in, the
@@ -34,7 +38,7 @@ async function writeWhileLeavingField(ticketId: number, write: () => PromiseLike
   await WorkOrder.findByPk(ticketId, { transaction: t, lock: t.LOCK.UPDATE });
   const pending = Promise.resolve(write());
   // The evidence write's lock on the ticket, or (without it) its insert's foreign key check.
-  await someoneWaits(t, /work_orders|INSERT INTO `(string_checks|diode_replacements)`/);
+  await someoneWaits(t, /work_orders|INSERT INTO `(string_checks|diode_replacements|photos)`/);
   await WorkOrder.update({ status: 'awaiting_signoff' }, { where: { id: ticketId }, transaction: t });
   await t.commit();
   return pending;
@@ -72,5 +76,18 @@ describe('evidence racing a ticket out of the field', () => {
     expect(res.status).toBe(409);
     expect(errorOf(res).message).toMatch(/now, so nothing was added/);
     expect(await DiodeReplacement.count({ where: { workOrderId: id } })).toBe(0);
+  });
+
+  it('refuses a photo that was waiting on the ticket when it was handed in, and leaves no file behind', async () => {
+    const { id, stringId } = await ticketInField();
+    const folder = path.join(apiTestEnv.UPLOADS_DIR, 'photos', String(id));
+    const img = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#4a7' } }).jpeg().toBuffer();
+    const res = await writeWhileLeavingField(id, () =>
+      tech.post(`/api/work-orders/${id}/photos`).set('x-csrf-token', tech.csrf).field('meta', JSON.stringify([{ tag: 'after', stringId }])).attach('files', img, 'after.jpg'),
+    );
+    expect(res.status).toBe(409);
+    expect(await Photo.count({ where: { workOrderId: id } })).toBe(0);
+    // The files are written before the ticket is locked; a refusal removes them.
+    expect(fs.existsSync(folder) ? fs.readdirSync(folder) : []).toEqual([]);
   });
 });
