@@ -3,7 +3,7 @@ import fs from 'node:fs/promises';
 import { beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
 import { PDFParse } from 'pdf-parse';
-import { sequelize, User } from '../../apps/api/src/models/index.ts';
+import { SignOff, sequelize, User } from '../../apps/api/src/models/index.ts';
 import { demoEmail, errorOf, resetDatabase, signIn, waitForMail, type Agent } from './helpers.ts';
 
 let dispatcher: Agent;
@@ -120,11 +120,22 @@ describe('signing off', () => {
       })
       .expect(200);
     await move(tech, 'awaiting_signoff');
+    const body = { comment: 'Diode replaced on module 4.', overrides: [{ stringId: strings[1]!.id, reason: 'Second substring of module 9 is shaded by a vent; tracked separately.' }] };
+    // The owner's close-out mail is queued with the sign-off: if it cannot be queued (here the outbox is
+    // not there), the ticket is not signed off either — no sign-off the owner never hears of.
+    await sequelize.query('RENAME TABLE mail_outbox TO mail_outbox_away');
+    try {
+      await supervisor.post(`/api/work-orders/${ticketId}/sign-off`).set('x-csrf-token', supervisor.csrf).send({ version: await version(), ...body }).expect(500);
+    } finally {
+      await sequelize.query('RENAME TABLE mail_outbox_away TO mail_outbox');
+    }
+    expect((await supervisor.get(`/api/work-orders/${ticketId}`).expect(200)).body.status).toBe('awaiting_signoff');
+    expect(await SignOff.count({ where: { workOrderId: ticketId } })).toBe(0);
     const since = Date.now() - 5;
     const res = await supervisor
       .post(`/api/work-orders/${ticketId}/sign-off`)
       .set('x-csrf-token', supervisor.csrf)
-      .send({ version: await version(), comment: 'Diode replaced on module 4.', overrides: [{ stringId: strings[1]!.id, reason: 'Second substring of module 9 is shaded by a vent; tracked separately.' }] })
+      .send({ version: await version(), ...body })
       .expect(201);
     expect(res.body.digest).toMatch(/^[0-9a-f]{64}$/);
     expect(res.body.overrides).toEqual([expect.objectContaining({ stringLabel: strings[1]!.label })]);
