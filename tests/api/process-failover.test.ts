@@ -77,6 +77,15 @@ class Browser {
   }
 }
 
+/** A browser signed in on `base`, holding the CSRF token of its session. */
+async function signedIn(base: string, email: string): Promise<Browser> {
+  const browser = new Browser();
+  await browser.fetchCsrf(base);
+  expect((await browser.call(base, 'POST', '/api/auth/login', { email, password: DEMO_PASSWORD })).status).toBe(200);
+  await browser.fetchCsrf(base);
+  return browser;
+}
+
 const sidOf = (cookie: string) =>
   decodeURIComponent(cookie.slice('sf.sid='.length)).replace(/^s:/, '').split('.')[0]!;
 
@@ -158,12 +167,7 @@ describe('two API processes sharing the session store', () => {
 describe('a process told to stop (SIGTERM)', () => {
   it('lets the handlers of clients that hung up finish before it closes its database pool', async () => {
     const c = await startApi(await freePort(), 'warn');
-    const browser = new Browser();
-    await browser.fetchCsrf(c.base);
-    expect(
-      (await browser.call(c.base, 'POST', '/api/auth/login', { email: demoEmail.dispatcher, password: DEMO_PASSWORD }))
-        .status,
-    ).toBe(200);
+    const browser = await signedIn(c.base, demoEmail.dispatcher);
     const { port } = new URL(c.base);
     const ticket = (await browser.call(c.base, 'GET', '/api/work-orders?pageSize=1')).body.items as Array<{ id: number }>;
     // 100 ticket pages at once (several queries each, more requests than the pool's 10 connections), each
@@ -188,13 +192,7 @@ describe('a process told to stop (SIGTERM)', () => {
 
   it('answers a request it was handling with Connection: close and takes no further request on that connection', async () => {
     const c = await startApi(await freePort(), 'warn');
-    const browser = new Browser();
-    await browser.fetchCsrf(c.base);
-    expect(
-      (await browser.call(c.base, 'POST', '/api/auth/login', { email: demoEmail.supervisor, password: DEMO_PASSWORD }))
-        .status,
-    ).toBe(200);
-    await browser.fetchCsrf(c.base);
+    const browser = await signedIn(c.base, demoEmail.supervisor);
     // The request is held in the database (its user row locked here) until the process has been told to stop.
     const user = (await User.findOne({ where: { email: demoEmail.supervisor } }))!;
     const t = await sequelize.transaction();

@@ -9,7 +9,7 @@ import { csrfSync } from 'csrf-sync';
 import { env } from './config/env.ts';
 import { countInFlight } from './lib/in-flight.ts';
 import { logger } from './lib/logger.ts';
-import { precompressedAssets, webShell } from './lib/web-shell.ts';
+import { IMMUTABLE_ASSET, precompressedAssets, webShell } from './lib/web-shell.ts';
 import { passport } from './lib/passport.ts';
 import { MariaDbSessionStore } from './lib/session-store.ts';
 import { requestId } from './middleware/request-id.ts';
@@ -145,7 +145,7 @@ export function createApp(options: AppOptions = {}): Express {
       express.static(webDist, {
         index: false,
         setHeaders: (res, file) => {
-          if (file.includes(`${path.sep}assets${path.sep}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+          if (file.includes(`${path.sep}assets${path.sep}`)) res.setHeader('Cache-Control', IMMUTABLE_ASSET);
         },
       }),
     );

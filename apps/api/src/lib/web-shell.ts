@@ -8,6 +8,9 @@ import type { RequestHandler } from 'express';
  */
 type FirstPage = { pattern: string; files: string[] };
 
+/** Built assets carry their content's hash in their name: a browser may keep them for good. */
+export const IMMUTABLE_ASSET = 'public, max-age=31536000, immutable';
+
 type Shell = { mtimeMs: number; plain: string; pages: Array<{ pattern: RegExp; html: string }> };
 
 /**
@@ -17,8 +20,8 @@ type Shell = { mtimeMs: number; plain: string; pages: Array<{ pattern: RegExp; h
  */
 export function webShell(webDist: string): RequestHandler {
   const indexFile = path.join(webDist, 'index.html');
-  let shell: Shell | null = null;
   const firstPagesFile = path.join(webDist, 'first-pages.json');
+  let shell: Shell | null = null;
   const load = (): Shell => {
     // Both files: a request in the middle of a build must not keep a half-written list.
     const mtimeMs = fs.statSync(indexFile).mtimeMs + (fs.existsSync(firstPagesFile) ? fs.statSync(firstPagesFile).mtimeMs : 0);
@@ -76,7 +79,7 @@ export function precompressedAssets(webDist: string): RequestHandler {
       'Content-Type': type,
       'Content-Encoding': 'br',
       Vary: 'Accept-Encoding',
-      'Cache-Control': 'public, max-age=31536000, immutable',
+      'Cache-Control': IMMUTABLE_ASSET,
     };
     res.set(headers);
     // Whole files only: a byte range of the compressed copy means nothing to the browser.
