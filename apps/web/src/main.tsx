@@ -22,7 +22,7 @@ start().catch((error: unknown) => showStartFailure(error, { isReactRendering }))
 
 async function start() {
   await nextTask();
-  preloadFirstPage(window.location.pathname);
+  preloadFirstPage(window.location);
   await nextTask();
   const { createRoot } = await import('react-dom/client');
   const container = document.getElementById('root');

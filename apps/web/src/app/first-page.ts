@@ -1,18 +1,39 @@
+import type { SessionUser } from '@stringfield/shared';
+import { authKeys } from '@/features/auth/api/keys';
+import { peekEarly } from '@/lib/early-answers';
+
+/** Where the first page was opened: the path and the query string. */
+export type FirstLocation = { pathname: string; search: string };
+
+/**
+ * A first page's module. `startFirstAnswers`, when it has one, asks for the page's data as soon as its
+ * code and the signed-in person are known (see lib/early-answers), instead of once React has rendered
+ * the page and its queries mount.
+ */
+type FirstPageModule = { startFirstAnswers?: (user: SessionUser, location: FirstLocation) => void };
+
 /**
  * The pages a crew opens first (a bookmark, a link in a message): their code starts downloading as the
  * app's own script starts, alongside it, instead of once the router is up and asks for it. The router's
  * lazy() for the route then gets the same module, already there or on its way. Any other page loads
  * when the router asks, as before.
  */
-const firstPages: ReadonlyArray<readonly [RegExp, () => Promise<unknown>]> = [
+const firstPages: ReadonlyArray<readonly [RegExp, () => Promise<object>]> = [
   [/^\/$/, () => import('./routes/home')],
   [/^\/sign-in\/?$/, () => import('./routes/sign-in')],
   [/^\/work-orders\/?$/, () => import('./routes/work-orders')],
   [/^\/work-orders\/[^/]+\/field\/?$/, () => import('./routes/field-checks')],
 ];
 
-export function preloadFirstPage(pathname: string): void {
-  const page = firstPages.find(([pattern]) => pattern.test(pathname));
-  // A failed download is reported by the router, which asks for the same module.
-  page?.[1]().catch(() => undefined);
+export function preloadFirstPage(location: FirstLocation): void {
+  const page = firstPages.find(([pattern]) => pattern.test(location.pathname));
+  if (!page) return;
+  const me = peekEarly<SessionUser | null>(authKeys.me()) ?? Promise.resolve(null);
+  // A failed download is reported by the router, which asks for the same module; a failed answer by
+  // the query that takes it over.
+  Promise.all([page[1](), me])
+    .then(([module, user]) => {
+      if (user) (module as FirstPageModule).startFirstAnswers?.(user, location);
+    })
+    .catch(() => undefined);
 }

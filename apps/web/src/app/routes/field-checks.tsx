@@ -1,16 +1,37 @@
-import { can } from '@stringfield/shared';
+import { can, type SessionUser } from '@stringfield/shared';
 import { useDeferredValue } from 'react';
-import { Link, useParams } from 'react-router';
+import { Link, matchPath, useParams } from 'react-router';
 import { ButtonLink } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Icon } from '@/components/ui/icon';
 import { LoadingRegion, Skeleton } from '@/components/ui/skeleton';
-import { paths } from '@/config/paths';
+import { paths, routes } from '@/config/paths';
 import { FieldPage } from '@/features/field-checks/components/field-page';
-import { useWorkOrder } from '@/features/work-orders/api/get-work-order';
+import { getStringSpec, stringSpecQueryOptions } from '@/features/field-checks/api/get-string-spec';
+import { getTicketChecks, ticketChecksQueryOptions } from '@/features/field-checks/api/get-ticket-checks';
+import { getWorkOrder, useWorkOrder, workOrderQueryOptions } from '@/features/work-orders/api/get-work-order';
 import { isApiError } from '@/lib/api-client';
+import { startEarly } from '@/lib/early-answers';
+import type { FirstLocation } from '../first-page';
 import { useSessionUser } from '../session';
+
+/**
+ * The field page's first answers, asked for as its code arrives: the ticket and its checks at once, and
+ * each string's datasheet as soon as the ticket says which strings it has.
+ */
+export function startFirstAnswers(_user: SessionUser, location: FirstLocation) {
+  const id = Number(matchPath(routes.fieldChecks, location.pathname)?.params.workOrderId);
+  if (!Number.isInteger(id) || id <= 0) return;
+  startEarly(ticketChecksQueryOptions(id).queryKey, () => getTicketChecks(id));
+  startEarly(workOrderQueryOptions(id).queryKey, async () => {
+    const ticket = await getWorkOrder(id);
+    for (const { id: stringId } of ticket.strings) {
+      startEarly(stringSpecQueryOptions(stringId).queryKey, () => getStringSpec(stringId));
+    }
+    return ticket;
+  });
+}
 
 function FieldSkeleton() {
   return (

@@ -1,4 +1,4 @@
-import { can, type WorkOrderListItem } from '@stringfield/shared';
+import { can, type SessionUser, type WorkOrderListItem } from '@stringfield/shared';
 import type { SortingState, Updater } from '@tanstack/react-table';
 import { useDeferredValue, useState } from 'react';
 import { useLocation, useSearchParams } from 'react-router';
@@ -9,7 +9,9 @@ import { Icon } from '@/components/ui/icon';
 import { PageHeader } from '@/components/ui/page-header';
 import { Pagination } from '@/components/ui/pagination';
 import { paths, toSearch } from '@/config/paths';
-import { useWorkOrders } from '@/features/work-orders/api/get-work-orders';
+import { getSiteOptions, siteOptionsQueryOptions } from '@/features/work-orders/api/get-sites';
+import { getTechnicians, techniciansQueryOptions } from '@/features/work-orders/api/get-technicians';
+import { getWorkOrders, useWorkOrders, workOrdersQueryOptions } from '@/features/work-orders/api/get-work-orders';
 import { BoardViews } from '@/features/work-orders/components/board-views';
 import { BulkAssignDialog } from '@/features/work-orders/components/bulk-assign-dialog';
 import { WorkOrderFilters } from '@/features/work-orders/components/work-order-filters';
@@ -23,7 +25,17 @@ import {
   workOrderListSearch,
   type WorkOrderListParams,
 } from '@/features/work-orders/lib/list-params';
+import { startEarly } from '@/lib/early-answers';
+import type { FirstLocation } from '../first-page';
 import { useSessionUser } from '../session';
+
+/** The board's first answers (the page of tickets, and the filters' sites and technicians), asked for as its code arrives. */
+export function startFirstAnswers(user: SessionUser, location: FirstLocation) {
+  const params = parseWorkOrderListParams(new URLSearchParams(location.search), user.role);
+  startEarly(workOrdersQueryOptions(params).queryKey, () => getWorkOrders(params));
+  startEarly(siteOptionsQueryOptions().queryKey, () => getSiteOptions());
+  if (can(user.role, 'workOrders:dispatch')) startEarly(techniciansQueryOptions().queryKey, () => getTechnicians());
+}
 
 /** The dispatcher board: every ticket the person may see, filtered, sorted and paged by the server, the view in the URL. */
 export function WorkOrdersRoute() {

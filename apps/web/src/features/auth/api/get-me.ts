@@ -1,6 +1,7 @@
 import { meResponseSchema, type SessionUser } from '@stringfield/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, isApiError } from '@/lib/api-client';
+import { answeredEarly, startEarly } from '@/lib/early-answers';
 import { authKeys } from './keys';
 
 /** The signed-in person, or null when nobody is signed in (401 is an answer here, not an error). */
@@ -14,33 +15,24 @@ export async function getMe(signal?: AbortSignal): Promise<SessionUser | null> {
   }
 }
 
-// The answer asked for while the app's code was still starting (see startMeEarly).
-let earlyMe: Promise<SessionUser | null> | null = null;
-
 /**
  * Asks who is signed in before React renders, so the answer travels alongside the page's code and the
  * restore of the kept copy instead of after them; the first `me` query takes it over.
  */
 export function startMeEarly(): void {
-  earlyMe = getMe();
-  // Handled by the query that takes the promise over; not an unhandled rejection meanwhile.
-  earlyMe.catch(() => undefined);
-}
-
-function takeEarlyMe(): Promise<SessionUser | null> | null {
-  const early = earlyMe;
-  earlyMe = null;
-  return early;
+  startEarly(authKeys.me(), () => getMe());
 }
 
 export const meQueryOptions = () =>
-  queryOptions({
-    queryKey: authKeys.me(),
-    queryFn: ({ signal }) => takeEarlyMe() ?? getMe(signal),
-    // Checked on every page load and when the window regains focus (a session can end on another
-    // device: sign out everywhere, deactivation); the kept copy shows meanwhile, and carries offline use.
-    staleTime: 0,
-  });
+  answeredEarly(
+    queryOptions({
+      queryKey: authKeys.me(),
+      queryFn: ({ signal }) => getMe(signal),
+      // Checked on every page load and when the window regains focus (a session can end on another
+      // device: sign out everywhere, deactivation); the kept copy shows meanwhile, and carries offline use.
+      staleTime: 0,
+    }),
+  );
 
 export function useMe() {
   return useQuery(meQueryOptions());

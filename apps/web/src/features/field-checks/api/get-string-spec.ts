@@ -1,6 +1,7 @@
 import { pvStringDetailSchema } from '@stringfield/shared';
 import { queryOptions, useQueries, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { answeredEarly } from '@/lib/early-answers';
 import { toModuleSpec, type StringSpec } from '../lib/string-spec';
 import { fieldCheckKeys } from './keys';
 
@@ -17,12 +18,14 @@ export async function getStringSpec(stringId: number, signal?: AbortSignal): Pro
 }
 
 export const stringSpecQueryOptions = (stringId: number) =>
-  queryOptions({
-    queryKey: fieldCheckKeys.stringSpec(stringId),
-    queryFn: ({ signal }) => getStringSpec(stringId, signal),
-    // A datasheet rarely changes during a visit.
-    staleTime: 60 * 60_000,
-  });
+  answeredEarly(
+    queryOptions({
+      queryKey: fieldCheckKeys.stringSpec(stringId),
+      queryFn: ({ signal }) => getStringSpec(stringId, signal),
+      // A datasheet rarely changes during a visit.
+      staleTime: 60 * 60_000,
+    }),
+  );
 
 export function useStringSpec(stringId: number) {
   return useQuery(stringSpecQueryOptions(stringId));

@@ -2,6 +2,7 @@ import { stringCheckSchema } from '@stringfield/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
+import { answeredEarly } from '@/lib/early-answers';
 import { fieldCheckKeys } from './keys';
 
 const checksResponseSchema = z.object({ items: z.array(stringCheckSchema) });
@@ -19,10 +20,12 @@ export async function getTicketChecks(workOrderId: number, signal?: AbortSignal)
 }
 
 export const ticketChecksQueryOptions = (workOrderId: number) =>
-  queryOptions({
-    queryKey: fieldCheckKeys.ticketChecks(workOrderId),
-    queryFn: ({ signal }) => getTicketChecks(workOrderId, signal),
-  });
+  answeredEarly(
+    queryOptions({
+      queryKey: fieldCheckKeys.ticketChecks(workOrderId),
+      queryFn: ({ signal }) => getTicketChecks(workOrderId, signal),
+    }),
+  );
 
 export function useTicketChecks(workOrderId: number) {
   return useQuery(ticketChecksQueryOptions(workOrderId));

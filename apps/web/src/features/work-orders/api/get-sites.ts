@@ -1,6 +1,7 @@
 import { pageOf, siteSchema } from '@stringfield/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { answeredEarly } from '@/lib/early-answers';
 import { workOrderKeys } from './keys';
 
 const sitesPageSchema = pageOf(siteSchema);
@@ -11,12 +12,14 @@ export function getSiteOptions(signal?: AbortSignal) {
 }
 
 export const siteOptionsQueryOptions = () =>
-  queryOptions({
-    queryKey: workOrderKeys.sites(),
-    queryFn: ({ signal }) => getSiteOptions(signal),
-    select: (data) => data.items.filter((site) => !site.isArchived),
-    staleTime: 5 * 60_000,
-  });
+  answeredEarly(
+    queryOptions({
+      queryKey: workOrderKeys.sites(),
+      queryFn: ({ signal }) => getSiteOptions(signal),
+      select: (data) => data.items.filter((site) => !site.isArchived),
+      staleTime: 5 * 60_000,
+    }),
+  );
 
 export function useSiteOptions() {
   return useQuery(siteOptionsQueryOptions());

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
+import { answeredEarly } from '@/lib/early-answers';
 import { workOrderKeys } from './keys';
 
 export const technicianSchema = z.object({ id: z.number(), name: z.string(), openCount: z.number() });
@@ -13,11 +14,13 @@ export function getTechnicians(signal?: AbortSignal) {
 }
 
 export const techniciansQueryOptions = () =>
-  queryOptions({
-    queryKey: workOrderKeys.technicians(),
-    queryFn: ({ signal }) => getTechnicians(signal),
-    select: (data) => data.items,
-  });
+  answeredEarly(
+    queryOptions({
+      queryKey: workOrderKeys.technicians(),
+      queryFn: ({ signal }) => getTechnicians(signal),
+      select: (data) => data.items,
+    }),
+  );
 
 export function useTechnicians(options: { isEnabled?: boolean } = {}) {
   return useQuery({ ...techniciansQueryOptions(), enabled: options.isEnabled ?? true });

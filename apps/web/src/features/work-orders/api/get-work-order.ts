@@ -1,6 +1,7 @@
 import { workOrderDetailSchema } from '@stringfield/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { answeredEarly } from '@/lib/early-answers';
 import { workOrderKeys } from './keys';
 
 /** One ticket with its strings, history and the transitions the signed-in person may take now. */
@@ -9,10 +10,12 @@ export function getWorkOrder(id: number, signal?: AbortSignal) {
 }
 
 export const workOrderQueryOptions = (id: number) =>
-  queryOptions({
-    queryKey: workOrderKeys.detail(id),
-    queryFn: ({ signal }) => getWorkOrder(id, signal),
-  });
+  answeredEarly(
+    queryOptions({
+      queryKey: workOrderKeys.detail(id),
+      queryFn: ({ signal }) => getWorkOrder(id, signal),
+    }),
+  );
 
 export function useWorkOrder(id: number) {
   return useQuery(workOrderQueryOptions(id));
