@@ -51,6 +51,29 @@ function preloadStartChunks(entries: RegExp, options: { name?: string; fetchPrio
 }
 
 /**
+ * `preload` links for the Latin faces every page sets its text in, so that they download beside the
+ * stylesheet instead of after the browser has read it and laid out the first text.
+ */
+function preloadFonts(files: RegExp): Plugin {
+  return {
+    name: 'stringfield:preload-fonts',
+    apply: 'build',
+    transformIndexHtml: {
+      order: 'post',
+      handler(_html, ctx) {
+        const fonts = Object.values(ctx.bundle ?? {}).filter((o) => o.type === 'asset' && files.test(o.fileName));
+        if (ctx.bundle && fonts.length === 0) throw new Error(`no font file matches ${files}`);
+        return fonts.map((font) => ({
+          tag: 'link',
+          attrs: { rel: 'preload', as: 'font', type: 'font/woff2', crossorigin: true, href: `/${font.fileName}` },
+          injectTo: 'head' as const,
+        }));
+      },
+    },
+  };
+}
+
+/**
  * dist/first-pages.json for the API: each first page of src/app/first-page.ts (its address pattern, read
  * from that file) with the script files its route needs, so the HTML served for that address can list
  * them as preloads (apps/api/src/lib/web-shell.ts).
@@ -119,6 +142,7 @@ export default defineConfig({
     // The toaster mounts once the first page has settled (app/provider.tsx), but its code is fetched now, at
     // low priority: a phone that loses signal in between still shows its toasts ("Kept on this phone").
     preloadStartChunks(/[\\/]src[\\/]components[\\/]ui[\\/]app-toaster\.tsx$/, { name: 'toaster', fetchPriority: 'low' }),
+    preloadFonts(/assets\/(inter|space-grotesk)-latin-wght-normal-[\w-]+\.woff2$/),
     firstPagesManifest(),
     brotliCopies(),
     tailwindcss(),
