@@ -74,3 +74,16 @@ test('the field page asks for the ticket and its checks before it is drawn, and 
     await technician.dispose();
   }
 });
+
+test("a technician's Today page asks for their work list before it is drawn, and once", async ({ page }) => {
+  await signIn(page, demoUsers.technician);
+  await recordCalls(page);
+  await page.goto('/');
+  await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+  await page.waitForLoadState('networkidle');
+
+  const calls = await callsOf(page);
+  const mine = calls.filter((c) => c.path.startsWith('/api/work-orders?') && c.path.includes('assigneeId=me'));
+  expect(mine, JSON.stringify(calls)).toHaveLength(1);
+  expect(mine[0]?.isPageDrawn, JSON.stringify(calls)).toBe(false);
+});

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { answeredEarly } from '@/lib/early-answers';
 import { workOrdersPageSchema } from './get-work-orders';
 import { workOrderKeys } from './keys';
 
@@ -12,11 +13,13 @@ export function getMyWorkOrders(signal?: AbortSignal) {
 }
 
 export const myWorkOrdersQueryOptions = () =>
-  queryOptions({
-    queryKey: workOrderKeys.mine(),
-    queryFn: ({ signal }) => getMyWorkOrders(signal),
-    refetchInterval: 60_000,
-  });
+  answeredEarly(
+    queryOptions({
+      queryKey: workOrderKeys.mine(),
+      queryFn: ({ signal }) => getMyWorkOrders(signal),
+      refetchInterval: 60_000,
+    }),
+  );
 
 export function useMyWorkOrders() {
   return useQuery(myWorkOrdersQueryOptions());
