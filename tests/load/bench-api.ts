@@ -333,9 +333,9 @@ async function main() {
         },
       ],
     });
-    const counted = (await db.query('SELECT COUNT(*) AS n FROM string_checks WHERE notes = ?', [
+    const counted = await db.query<Array<{ n: number }>>('SELECT COUNT(*) AS n FROM string_checks WHERE notes = ?', [
       benchNote,
-    ])) as Array<{ n: number }>;
+    ]);
     const inserted = counted[0]?.n ?? 0;
     say(
       `    ${created} answered 201; ${inserted} checks inserted (the few more were in flight when the run stopped)`,

@@ -59,13 +59,13 @@ async function main() {
     password: process.env.DB_PASSWORD ?? 'stringfield-local',
     database: dbName,
   });
-  const [site] = (await conn.query(
+  const [site] = await conn.query<Array<{ id: number; code: string }>>(
     "SELECT id, code FROM sites WHERE code LIKE 'Z%' ORDER BY id LIMIT 1",
-  )) as Array<{ id: number; code: string }>;
-  const [inSite] = (await conn.query(
+  );
+  const [inSite] = await conn.query<Array<{ n: bigint }>>(
     'SELECT COUNT(*) AS n FROM string_checks c JOIN work_orders w ON w.id = c.work_order_id WHERE w.site_id = ?',
     [site!.id],
-  )) as Array<{ n: bigint }>;
+  );
   await conn.end();
 
   const server = await startApi(port, { DB_NAME: dbName, UPLOADS_DIR: path.join(root, '.data/uploads-bench') });

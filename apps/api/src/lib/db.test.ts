@@ -2,25 +2,26 @@ import { describe, expect, it } from 'vitest';
 import { withDeletableMeta } from './db.ts';
 
 /** Rows as connector 3.1 and later return them: `meta` defined without `configurable`. */
-function connectorRows() {
+function connectorRows(): Array<{ id: number }> {
   const rows = [{ id: 1 }, { id: 2 }];
   Object.defineProperty(rows, 'meta', { value: [{ name: 'id' }], writable: true, enumerable: false });
-  return rows as typeof rows & { meta?: unknown };
+  return rows;
 }
+
+/** The result as Sequelize sees it: an object with a `meta` to take away. */
+const withMeta = (rows: unknown) => rows as { meta?: unknown };
 
 describe('withDeletableMeta', () => {
   it("lets Sequelize delete a result's meta, which the connector's own result refuses", () => {
-    const original = connectorRows();
+    const original = withMeta(connectorRows());
     expect(() => {
-      'use strict';
       delete original.meta;
     }).toThrow(TypeError);
 
     const rows = withDeletableMeta(connectorRows());
-    const meta = rows.meta;
-    expect(meta).toEqual([{ name: 'id' }]);
-    delete rows.meta;
-    expect(rows.meta).toBeUndefined();
+    expect(withMeta(rows).meta).toEqual([{ name: 'id' }]);
+    delete withMeta(rows).meta;
+    expect(withMeta(rows).meta).toBeUndefined();
     expect(rows).toEqual([{ id: 1 }, { id: 2 }]);
     expect(Object.keys(rows)).toEqual(['0', '1']);
   });

@@ -23,7 +23,7 @@ const connector = {
   createConnection: async (config: ConnectionConfig) => {
     const connection = await mariadb.createConnection(config);
     const query = connection.query.bind(connection);
-    connection.query = (async (...args: Parameters<typeof query>) => withDeletableMeta(await query(...args))) as typeof query;
+    connection.query = (async (...args: Parameters<typeof query>) => withDeletableMeta(await query(...args)));
     return connection;
   },
 };
