@@ -13,7 +13,9 @@ type QueryStream = Readable & { close(): void };
  * never sits in memory. The connection goes back to the pool when the driver has finished the query.
  * When the reader goes away first (a download cancelled half-way), the query is killed on the server and
  * the driver told to skip what is still in flight; a paused stream would otherwise hold its pooled
- * connection for good. (The driver's own `destroy()` cannot do this in 3.0.2: its kill path throws.)
+ * connection for good. (Written against connector 3.0.2, whose own `destroy()` could not do this: its kill
+ * path threw. tests/api/fleet.test.ts, "gives the database connection back when a download is cancelled
+ * half-way", holds it on the connector in use.)
  */
 export async function streamRows(sql: string, values: unknown[]): Promise<Readable> {
   const cm = sequelize.connectionManager as unknown as {
