@@ -3,8 +3,10 @@ import { once } from 'node:events';
 import net from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Session, User, sequelize } from '../../apps/api/src/models/index.ts';
+import { QueryTypes } from 'sequelize';
+import { Session, Site, User, sequelize } from '../../apps/api/src/models/index.ts';
 import { DEMO_PASSWORD, demoEmail, resetDatabase, someoneWaits } from './helpers.ts';
 import { apiTestEnv } from './test-env.ts';
 
@@ -84,6 +86,20 @@ async function signedIn(base: string, email: string): Promise<Browser> {
   expect((await browser.call(base, 'POST', '/api/auth/login', { email, password: DEMO_PASSWORD })).status).toBe(200);
   await browser.fetchCsrf(base);
   return browser;
+}
+
+/** The body of a chunked HTTP/1.1 answer; throws unless it ends with the last (empty) chunk. */
+function dechunked(raw: Buffer): string {
+  const parts: Buffer[] = [];
+  let at = 0;
+  for (;;) {
+    const eol = raw.indexOf('\r\n', at);
+    if (eol < 0) throw new Error('the answer was cut off before its last chunk');
+    const size = parseInt(raw.subarray(at, eol).toString('latin1'), 16);
+    if (size === 0) return Buffer.concat(parts).toString('utf8');
+    parts.push(raw.subarray(eol + 2, eol + 2 + size));
+    at = eol + 2 + size + 2;
+  }
 }
 
 const sidOf = (cookie: string) =>
@@ -224,4 +240,76 @@ describe('a process told to stop (SIGTERM)', () => {
     expect(received.match(/HTTP\/1\.1 \d{3}/g)).toHaveLength(1);
     expect(code).toBe(0);
   }, 30_000);
+
+  it('sends a long download to the end to a client that reads it slowly, then exits', async () => {
+    const c = await startApi(await freePort(), 'warn');
+    const [dispatcher, tech, admin] = await Promise.all([
+      signedIn(c.base, demoEmail.dispatcher),
+      signedIn(c.base, demoEmail.technician),
+      signedIn(c.base, demoEmail.admin),
+    ]);
+    // A check on a ticket of its own, then 30,000 copies of it: a CSV of several megabytes, far more than
+    // the socket buffers hold, so the answer is still being written when the process is told to stop.
+    const site = (await Site.findOne({ where: { code: 'CBD' } }))!;
+    const strings = (await dispatcher.call(c.base, 'GET', `/api/sites/${site.id}/strings?q=INV04-MPPT1`)).body.items as Array<{ id: number }>;
+    const techId = (await User.findOne({ where: { email: demoEmail.technician } }))!.id;
+    const created = await dispatcher.call(c.base, 'POST', '/api/work-orders', {
+      siteId: site.id,
+      strings: [{ stringId: strings[0]!.id, symptom: 'low current' }],
+      faultCategory: 'shading_soiling',
+      priority: 'P3',
+      title: 'Slow download at shutdown',
+      source: 'inspection',
+      assigneeId: techId,
+    });
+    expect(created.status).toBe(201);
+    const ticket = (created.body.items as Array<{ id: number; version: number }>)[0]!;
+    expect((await tech.call(c.base, 'POST', `/api/work-orders/${ticket.id}/transitions`, { to: 'in_field', version: ticket.version })).status).toBe(200);
+    const check = await tech.call(c.base, 'POST', `/api/work-orders/${ticket.id}/checks`, {
+      clientId: randomUUID(), stringId: strings[0]!.id, phase: 'before', takenAt: new Date().toISOString(), vocV: 690, iscA: 9.1,
+      irradianceWm2: 900, irradianceMethod: 'reference_cell', moduleTempC: 40, moduleTempMethod: 'back_sensor', polarityCorrect: true,
+    });
+    expect(check.status).toBe(201);
+    const [{ c: cols }] = await sequelize.query<{ c: string }>(
+      "SELECT GROUP_CONCAT(column_name ORDER BY ordinal_position) AS c FROM information_schema.columns WHERE table_schema = DATABASE() AND table_name = 'string_checks' AND column_name NOT IN ('id', 'client_id')",
+      { type: QueryTypes.SELECT },
+    ) as [{ c: string }];
+    await sequelize.query(`INSERT INTO string_checks (client_id, ${cols}) SELECT UUID(), ${cols} FROM string_checks, seq_1_to_30000 WHERE id = ${Number(check.body.id)}`);
+    try {
+      const day = new Date().toISOString().slice(0, 10);
+      const url = `/api/fleet/exports/checks.csv?siteId=${site.id}&from=2026-01-01&to=${day}`;
+      const whole = await (await fetch(c.base + url, { headers: { cookie: admin.cookie } })).text();
+      const lines = whole.trim().split(/\r?\n/).length;
+      expect(lines).toBeGreaterThan(30_000);
+
+      const socket = net.connect(Number(new URL(c.base).port), '127.0.0.1');
+      socket.on('error', () => {});
+      const chunks: Buffer[] = [];
+      socket.on('data', (chunk: Buffer) => chunks.push(chunk));
+      // Uncompressed, so the rows cannot all sit in zlib's buffers.
+      socket.write(`GET ${url} HTTP/1.1\r\nHost: 127.0.0.1\r\nCookie: ${admin.cookie}\r\nAccept-Encoding: identity\r\n\r\n`);
+      await once(socket, 'data');
+      socket.pause();
+      const stopAt = Date.now();
+      c.child.kill('SIGTERM');
+      // The process has begun to drain (no new connections) while this answer waits on the paused reader.
+      await expect
+        .poll(() => fetch(`${c.base}/api/health`).then(() => 'still listening', () => 'draining'), { timeout: 5_000 })
+        .toBe('draining');
+      socket.resume();
+      await once(socket, 'close');
+      const [code] = (await once(c.child, 'exit')) as [number | null];
+      // Its headers went out before the drain (keep-alive); the connection is closed once the answer is
+      // written, not left open to the 7 s deadline (here about 0.8 s; 6.5 s before, waiting for the deadline).
+      expect(Date.now() - stopAt).toBeLessThan(4_000);
+      const received = Buffer.concat(chunks);
+      expect(received.toString('latin1')).toMatch(/^HTTP\/1\.1 200/);
+      // Chunked to its last chunk, with every line of the download read in one go before.
+      const body = dechunked(received.subarray(received.indexOf('\r\n\r\n') + 4));
+      expect(body.trim().split(/\r?\n/).length).toBe(lines);
+      expect(code).toBe(0);
+    } finally {
+      await sequelize.query(`DELETE FROM string_checks WHERE work_order_id = ${ticket.id}`);
+    }
+  }, 60_000);
 });

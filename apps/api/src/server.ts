@@ -74,9 +74,13 @@ async function shutdown(signal: string) {
   await step('waiting for requests', async () => {
     if (!(await requestsSettled(deadline))) logger.warn({ inFlight: requestsInFlight() }, 'requests still running at shutdown; closing anyway');
     if (!(await databaseQuiet(200, Math.max(0, deadline - Date.now())))) logger.warn('database work still running at shutdown; closing anyway');
-    // With `Connection: close` on every answer, each socket closes once its answer is flushed; what is
-    // still open at the deadline (a client that reads too slowly, an idle socket) is closed then.
+    // With `Connection: close` on every answer, each socket closes once its answer is flushed. An answer
+    // whose headers went out before the drain began said keep-alive: its connection turns idle once the
+    // answer is written, and is closed then (checked every 100 ms) rather than left to the deadline. What
+    // is still open at the deadline (a client that reads too slowly) is closed then.
+    const closeIdle = setInterval(() => server.closeIdleConnections(), 100);
     await Promise.race([closed, new Promise((resolve) => setTimeout(resolve, Math.max(0, deadline - Date.now())))]);
+    clearInterval(closeIdle);
     server.closeAllConnections();
     await closed;
   });
