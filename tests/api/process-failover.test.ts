@@ -5,6 +5,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import sharp from 'sharp';
 import { QueryTypes } from 'sequelize';
 import { Session, Site, User, sequelize } from '../../apps/api/src/models/index.ts';
 import { DEMO_PASSWORD, demoEmail, resetDatabase, someoneWaits } from './helpers.ts';
@@ -180,6 +181,42 @@ describe('two API processes sharing the session store', () => {
   }, 30_000);
 });
 
+/** A ticket at CBD on the string `label`, dispatched to the demo technician and started. */
+async function ticketInTheField(base: string, dispatcher: Browser, tech: Browser, label: string) {
+  const site = (await Site.findOne({ where: { code: 'CBD' } }))!;
+  const strings = (await dispatcher.call(base, 'GET', `/api/sites/${site.id}/strings?q=${label}`)).body.items as Array<{ id: number }>;
+  const techId = (await User.findOne({ where: { email: demoEmail.technician } }))!.id;
+  const created = await dispatcher.call(base, 'POST', '/api/work-orders', {
+    siteId: site.id,
+    strings: [{ stringId: strings[0]!.id, symptom: 'low current' }],
+    faultCategory: 'shading_soiling',
+    priority: 'P3',
+    title: 'A download at shutdown',
+    source: 'inspection',
+    assigneeId: techId,
+  });
+  expect(created.status).toBe(201);
+  const ticket = (created.body.items as Array<{ id: number; version: number }>)[0]!;
+  expect((await tech.call(base, 'POST', `/api/work-orders/${ticket.id}/transitions`, { to: 'in_field', version: ticket.version })).status).toBe(200);
+  return { ticket, stringId: strings[0]!.id, siteId: site.id };
+}
+
+/** The exit code of a child process, whether it has exited already or does later. */
+function exitOf(child: ChildProcess): Promise<number | null> {
+  if (child.exitCode !== null) return Promise.resolve(child.exitCode);
+  return once(child, 'exit').then(([code]) => code as number | null);
+}
+
+/** Reads a paused socket slowly to its close, a burst every 40 ms; resolves when it closes. */
+async function readSlowlyToClose(socket: net.Socket): Promise<void> {
+  const slowly = setInterval(() => {
+    socket.resume();
+    setTimeout(() => socket.pause(), 2);
+  }, 40);
+  await once(socket, 'close');
+  clearInterval(slowly);
+}
+
 describe('a process told to stop (SIGTERM)', () => {
   it('lets the handlers of clients that hung up finish before it closes its database pool', async () => {
     const c = await startApi(await freePort(), 'warn');
@@ -250,23 +287,9 @@ describe('a process told to stop (SIGTERM)', () => {
     ]);
     // A check on a ticket of its own, then 30,000 copies of it: a CSV of several megabytes, far more than
     // the socket buffers hold, so the answer is still being written when the process is told to stop.
-    const site = (await Site.findOne({ where: { code: 'CBD' } }))!;
-    const strings = (await dispatcher.call(c.base, 'GET', `/api/sites/${site.id}/strings?q=INV04-MPPT1`)).body.items as Array<{ id: number }>;
-    const techId = (await User.findOne({ where: { email: demoEmail.technician } }))!.id;
-    const created = await dispatcher.call(c.base, 'POST', '/api/work-orders', {
-      siteId: site.id,
-      strings: [{ stringId: strings[0]!.id, symptom: 'low current' }],
-      faultCategory: 'shading_soiling',
-      priority: 'P3',
-      title: 'Slow download at shutdown',
-      source: 'inspection',
-      assigneeId: techId,
-    });
-    expect(created.status).toBe(201);
-    const ticket = (created.body.items as Array<{ id: number; version: number }>)[0]!;
-    expect((await tech.call(c.base, 'POST', `/api/work-orders/${ticket.id}/transitions`, { to: 'in_field', version: ticket.version })).status).toBe(200);
+    const { ticket, stringId, siteId } = await ticketInTheField(c.base, dispatcher, tech, 'INV04-MPPT1');
     const check = await tech.call(c.base, 'POST', `/api/work-orders/${ticket.id}/checks`, {
-      clientId: randomUUID(), stringId: strings[0]!.id, phase: 'before', takenAt: new Date().toISOString(), vocV: 690, iscA: 9.1,
+      clientId: randomUUID(), stringId, phase: 'before', takenAt: new Date().toISOString(), vocV: 690, iscA: 9.1,
       irradianceWm2: 900, irradianceMethod: 'reference_cell', moduleTempC: 40, moduleTempMethod: 'back_sensor', polarityCorrect: true,
     });
     expect(check.status).toBe(201);
@@ -277,7 +300,7 @@ describe('a process told to stop (SIGTERM)', () => {
     await sequelize.query(`INSERT INTO string_checks (client_id, ${cols}) SELECT UUID(), ${cols} FROM string_checks, seq_1_to_30000 WHERE id = ${Number(check.body.id)}`);
     try {
       const day = new Date().toISOString().slice(0, 10);
-      const url = `/api/fleet/exports/checks.csv?siteId=${site.id}&from=2026-01-01&to=${day}`;
+      const url = `/api/fleet/exports/checks.csv?siteId=${siteId}&from=2026-01-01&to=${day}`;
       const whole = await (await fetch(c.base + url, { headers: { cookie: admin.cookie } })).text();
       const lines = whole.trim().split(/\r?\n/).length;
       expect(lines).toBeGreaterThan(30_000);
@@ -290,18 +313,24 @@ describe('a process told to stop (SIGTERM)', () => {
       socket.write(`GET ${url} HTTP/1.1\r\nHost: 127.0.0.1\r\nCookie: ${admin.cookie}\r\nAccept-Encoding: identity\r\n\r\n`);
       await once(socket, 'data');
       socket.pause();
-      const stopAt = Date.now();
       c.child.kill('SIGTERM');
       // The process has begun to drain (no new connections) while this answer waits on the paused reader.
       await expect
         .poll(() => fetch(`${c.base}/api/health`).then(() => 'still listening', () => 'draining'), { timeout: 5_000 })
         .toBe('draining');
-      socket.resume();
-      await once(socket, 'close');
+      // Read slowly to the end, a burst every 40 ms: the handler ends the answer while its tail still waits
+      // in the process's buffers, and the connection must stay open until that tail is out.
+      let completeAt = 0;
+      socket.on('data', () => {
+        if (!completeAt && Buffer.concat(chunks.slice(-2)).toString('latin1').endsWith('\r\n0\r\n\r\n')) completeAt = Date.now();
+      });
+      await readSlowlyToClose(socket);
+      const closedAt = Date.now();
       const [code] = (await once(c.child, 'exit')) as [number | null];
-      // Its headers went out before the drain (keep-alive); the connection is closed once the answer is
-      // written, not left open to the 7 s deadline (here about 0.8 s; 6.5 s before, waiting for the deadline).
-      expect(Date.now() - stopAt).toBeLessThan(4_000);
+      expect(completeAt, 'the last chunk arrived').toBeGreaterThan(0);
+      // Its headers went out keep-alive before the drain: the connection is ended once the answer is out,
+      // not left open to the 7 s deadline.
+      expect(closedAt - completeAt).toBeLessThan(1_500);
       const received = Buffer.concat(chunks);
       expect(received.toString('latin1')).toMatch(/^HTTP\/1\.1 200/);
       // Chunked to its last chunk, with every line of the download read in one go before.
@@ -311,5 +340,47 @@ describe('a process told to stop (SIGTERM)', () => {
     } finally {
       await sequelize.query(`DELETE FROM string_checks WHERE work_order_id = ${ticket.id}`);
     }
+  }, 60_000);
+
+  it('sends a large photo, written in one piece, to the end to a reader paused when the process stops', async () => {
+    const c = await startApi(await freePort(), 'warn');
+    const [dispatcher, tech] = await Promise.all([signedIn(c.base, demoEmail.dispatcher), signedIn(c.base, demoEmail.technician)]);
+    const { ticket, stringId } = await ticketInTheField(c.base, dispatcher, tech, 'INV04-MPPT2');
+    // Noise compresses badly: a JPEG of several megabytes, which the API answers with one write.
+    const img = await sharp({ create: { width: 2400, height: 1800, channels: 3, background: '#888', noise: { type: 'gaussian', mean: 128, sigma: 60 } } })
+      .jpeg({ quality: 95 })
+      .toBuffer();
+    const form = new FormData();
+    form.append('meta', JSON.stringify([{ tag: 'before', stringId }]));
+    form.append('files', new Blob([img], { type: 'image/jpeg' }), 'noise.jpg');
+    const uploaded = await fetch(`${c.base}/api/work-orders/${ticket.id}/photos`, { method: 'POST', headers: { cookie: tech.cookie, 'x-csrf-token': tech.csrf }, body: form });
+    expect(uploaded.status).toBe(201);
+    const photoId = ((await uploaded.json()) as { items: Array<{ id: number }> }).items[0]!.id;
+    const url = `/api/photos/${photoId}/original`;
+    const size = (await (await fetch(c.base + url, { headers: { cookie: tech.cookie } })).arrayBuffer()).byteLength;
+    expect(size).toBeGreaterThan(3_000_000);
+
+    const socket = net.connect(Number(new URL(c.base).port), '127.0.0.1');
+    socket.on('error', () => {});
+    const chunks: Buffer[] = [];
+    socket.on('data', (chunk: Buffer) => chunks.push(chunk));
+    socket.write(`GET ${url} HTTP/1.1\r\nHost: 127.0.0.1\r\nCookie: ${tech.cookie}\r\nAccept-Encoding: identity\r\n\r\n`);
+    await once(socket, 'data');
+    socket.pause();
+    c.child.kill('SIGTERM');
+    await expect
+      .poll(() => fetch(`${c.base}/api/health`).then(() => 'still listening', () => 'draining'), { timeout: 5_000 })
+      .toBe('draining');
+    // Past the point where the process stops waiting for handlers (this one ended its answer at once): a
+    // connection closed now would lose what is still in the process's buffers.
+    await new Promise((r) => setTimeout(r, 800));
+    const exited = exitOf(c.child);
+    await readSlowlyToClose(socket);
+    const code = await exited;
+    const received = Buffer.concat(chunks);
+    const headEnd = received.indexOf('\r\n\r\n');
+    expect(received.subarray(0, headEnd).toString('latin1')).toMatch(new RegExp(`^HTTP/1\\.1 200[\\s\\S]*\\r\\ncontent-length: ${size}`, 'i'));
+    expect(received.length - headEnd - 4).toBe(size);
+    expect(code).toBe(0);
   }, 60_000);
 });

@@ -1,6 +1,6 @@
 import { createApp } from './app.ts';
 import { env } from './config/env.ts';
-import { beginDraining, requestsInFlight, requestsSettled } from './lib/in-flight.ts';
+import { beginDraining, requestsInFlight, requestsSettled, stopAccepting, trackConnections } from './lib/in-flight.ts';
 import { logger } from './lib/logger.ts';
 import { closeMailer, mailIdle, startMailSweep } from './lib/mailer.ts';
 import { startOverdueSweep } from './services/overdue-sweep.service.ts';
@@ -10,6 +10,7 @@ const app = createApp();
 const server = app.listen(env.PORT, env.HOST, () => {
   logger.info(`Stringfield is serving on ${env.APP_URL}`);
 });
+trackConnections(server);
 server.on('error', (err) => {
   logger.fatal({ err }, `could not listen on ${env.HOST}:${env.PORT}`);
   process.exit(1);
@@ -68,19 +69,15 @@ async function shutdown(signal: string) {
   await step('closing the listener', () => {
     // No new connections; answers from now on carry `Connection: close`; idle keep-alive ones close now.
     beginDraining();
-    closed = new Promise<void>((resolve) => server.close(() => resolve()));
-    server.closeIdleConnections();
+    closed = stopAccepting(server);
   });
   await step('waiting for requests', async () => {
     if (!(await requestsSettled(deadline))) logger.warn({ inFlight: requestsInFlight() }, 'requests still running at shutdown; closing anyway');
     if (!(await databaseQuiet(200, Math.max(0, deadline - Date.now())))) logger.warn('database work still running at shutdown; closing anyway');
-    // With `Connection: close` on every answer, each socket closes once its answer is flushed. An answer
-    // whose headers went out before the drain began said keep-alive: its connection turns idle once the
-    // answer is written, and is closed then (checked every 100 ms) rather than left to the deadline. What
-    // is still open at the deadline (a client that reads too slowly) is closed then.
-    const closeIdle = setInterval(() => server.closeIdleConnections(), 100);
+    // With `Connection: close` on every answer, each socket closes once its answer is flushed (an answer
+    // whose headers went out keep-alive before the drain is ended by lib/in-flight.ts once the system has
+    // all of it); what is still open at the deadline (a client that reads too slowly) is closed then.
     await Promise.race([closed, new Promise((resolve) => setTimeout(resolve, Math.max(0, deadline - Date.now())))]);
-    clearInterval(closeIdle);
     server.closeAllConnections();
     await closed;
   });
