@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { apiSignIn, demoUsers, openDispatchedTicket, signIn, uniqueSuffix, viewports } from './helpers.ts';
+import { apiSignIn, DEMO_PASSWORD, demoUsers, openDispatchedTicket, signIn, uniqueSuffix, viewports } from './helpers.ts';
 
 // The board and the field page ask for their data as soon as their code and the signed-in person are
 // known (apps/web/src/app/first-page.ts, lib/early-answers.ts), not once React has drawn the page and
@@ -25,10 +25,20 @@ async function recordCalls(page: Page) {
   });
 }
 
+/**
+ * Signs the browser in without opening the app, so that no copy of the person is kept on the device yet
+ * and the page waits for the server to say who is signed in (the first visit of the day).
+ */
+async function signInFirstVisit(page: Page, email: string) {
+  const { csrfToken } = (await (await page.request.get('/api/auth/csrf')).json()) as { csrfToken: string };
+  const res = await page.request.post('/api/auth/login', { data: { email, password: DEMO_PASSWORD }, headers: { 'x-csrf-token': csrfToken } });
+  expect(res.ok()).toBe(true);
+}
+
 const callsOf = (page: Page) => page.evaluate(() => (window as unknown as { __calls: Call[] }).__calls);
 
 test('the board asks for its tickets, sites and technicians before it is drawn, and once each', async ({ page }) => {
-  await signIn(page, demoUsers.dispatcher);
+  await signInFirstVisit(page, demoUsers.dispatcher);
   await recordCalls(page);
   await page.goto('/work-orders');
   await expect(page.getByRole('heading', { level: 1, name: 'Work orders' })).toBeVisible();
@@ -53,7 +63,7 @@ test('the field page asks for the ticket and its checks before it is drawn, and 
     const ticket = await openDispatchedTicket(dispatcher, { siteCode: 'OSR', labels, title: `E2E ${uniqueSuffix()}: early answers` });
     await technician.post(`/api/work-orders/${ticket.id}/transitions`, { to: 'in_field', version: ticket.version });
 
-    await signIn(page, demoUsers.technician);
+    await signInFirstVisit(page, demoUsers.technician);
     await recordCalls(page);
     await page.goto(`/work-orders/${ticket.id}/field`);
     await expect(page.getByRole('heading', { level: 1, name: 'Field checks' })).toBeVisible();
@@ -76,7 +86,7 @@ test('the field page asks for the ticket and its checks before it is drawn, and 
 });
 
 test("a technician's Today page asks for their work list before it is drawn, and once", async ({ page }) => {
-  await signIn(page, demoUsers.technician);
+  await signInFirstVisit(page, demoUsers.technician);
   await recordCalls(page);
   await page.goto('/');
   await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
@@ -87,3 +97,27 @@ test("a technician's Today page asks for their work list before it is drawn, and
   expect(mine, JSON.stringify(calls)).toHaveLength(1);
   expect(mine[0]?.isPageDrawn, JSON.stringify(calls)).toBe(false);
 });
+
+test('a board drawn from the kept copy before the server has said who is signed in asks for each answer once', async ({ page }) => {
+  await signIn(page, demoUsers.dispatcher);
+  await page.goto('/work-orders');
+  await expect(page.getByRole('list', { name: 'Work orders' }).getByRole('listitem').first()).toBeVisible();
+  // The person is kept on the device: on the next load the page is drawn from that copy, and asks for its
+  // data, while the server's answer to "who is signed in" is still on its way (held here).
+  await page.route('**/api/auth/me', async (route) => {
+    await new Promise((resolve) => setTimeout(resolve, 1_500));
+    await route.continue();
+  });
+  await recordCalls(page);
+  await page.reload();
+  await expect(page.getByRole('list', { name: 'Work orders' }).getByRole('listitem').first()).toBeVisible();
+  await expect.poll(async () => (await callsOf(page)).some((c) => c.path === '/api/auth/me')).toBe(true);
+  await page.waitForTimeout(2_000);
+  await page.waitForLoadState('networkidle');
+
+  const calls = await callsOf(page);
+  for (const prefix of ['/api/work-orders?', '/api/sites?', '/api/technicians']) {
+    expect(calls.filter((c) => c.path.startsWith(prefix)), `${prefix} ${JSON.stringify(calls)}`).toHaveLength(1);
+  }
+});
+

@@ -6,6 +6,7 @@ import { lazy, Suspense, useEffect, useState, type ReactNode } from 'react';
 import type { SessionUser } from '@stringfield/shared';
 import { authKeys } from '@/features/auth/api/keys';
 import { afterPageSettles } from '@/lib/after-load';
+import { clearEarlyAnswers } from '@/lib/early-answers';
 import { createQueryClient } from '@/lib/query-client';
 import {
   createCacheOwner,
@@ -53,7 +54,10 @@ export function AppProvider({ children }: { children: ReactNode }) {
     const client = createQueryClient({
       // Any 401 means the session is gone (expired, or an administrator ended it): forget the person,
       // and the protected layout sends them to sign in with a way back.
-      onUnauthenticated: () => client.setQueryData(authKeys.me(), null),
+      onUnauthenticated: () => {
+        clearEarlyAnswers();
+        client.setQueryData(authKeys.me(), null);
+      },
     });
     return { queryClient: client, persister: setUpPersistence(client) };
   });

@@ -57,6 +57,40 @@ describe('early answers', () => {
     await expect(client.fetchQuery(ticketOptions(() => Promise.resolve('fresh')))).resolves.toBe('fresh');
   });
 
+  it('starts nothing for a key a query has already asked for itself (a kept copy drew the page first)', async () => {
+    const client = new QueryClient();
+    await client.fetchQuery(ticketOptions(() => Promise.resolve('asked by the query')));
+    const early = vi.fn(() => Promise.resolve('asked early'));
+    startEarly(['work-orders', 'detail', 7], early);
+    expect(early).not.toHaveBeenCalled();
+    expect(peekEarly(['work-orders', 'detail', 7])).toBeUndefined();
+  });
+
+  it('passes over an early answer once the query was invalidated: something changed on the server since', async () => {
+    const client = new QueryClient();
+    client.setQueryData(['work-orders', 'detail', 7], 'kept copy');
+    startEarly(['work-orders', 'detail', 7], () => Promise.resolve('asked before the change'));
+    await client.invalidateQueries({ queryKey: ['work-orders', 'detail', 7], refetchType: 'none' });
+    await expect(client.fetchQuery({ ...ticketOptions(() => Promise.resolve('asked after')), staleTime: 0 })).resolves.toBe('asked after');
+  });
+
+  it('passes over an early answer older than what the cache holds', async () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    const client = new QueryClient();
+    startEarly(['work-orders', 'detail', 7], () => Promise.resolve('asked early'));
+    vi.setSystemTime(Date.now() + 1_000);
+    client.setQueryData(['work-orders', 'detail', 7], 'written by a mutation since');
+    await expect(client.fetchQuery({ ...ticketOptions(() => Promise.resolve('asked afresh')), staleTime: 0 })).resolves.toBe('asked afresh');
+  });
+
+  it('forgets which keys were asked for when the person changes', async () => {
+    const client = new QueryClient();
+    await client.fetchQuery(ticketOptions(() => Promise.resolve('first person')));
+    clearEarlyAnswers();
+    startEarly(['work-orders', 'detail', 7], () => Promise.resolve('next person, early'));
+    expect(peekEarly(['work-orders', 'detail', 7])).toBeDefined();
+  });
+
   // Reference: TanStack Query's own hashKey, which its query cache matches keys with.
   it.each([
     [['auth', 'me']],

@@ -1,6 +1,7 @@
 import { meResponseSchema, type LoginInput, type SessionUser } from '@stringfield/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, clearCsrfToken } from '@/lib/api-client';
+import { clearEarlyAnswers } from '@/lib/early-answers';
 import { authKeys } from './keys';
 
 export async function signIn(input: LoginInput): Promise<SessionUser> {
@@ -15,7 +16,8 @@ export function useSignIn() {
   return useMutation({
     mutationFn: signIn,
     onSuccess: (user) => {
-      // Anything cached belonged to whoever was here before.
+      // Anything cached belonged to whoever was here before, answers asked for early too.
+      clearEarlyAnswers();
       queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.all[0] });
       queryClient.setQueryData(authKeys.me(), user);
     },

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api, clearCsrfToken } from '@/lib/api-client';
+import { clearEarlyAnswers } from '@/lib/early-answers';
 import { paths } from '@/config/paths';
 import { authKeys } from './keys';
 
@@ -17,6 +18,7 @@ export async function signOut(): Promise<void> {
  */
 function forgetPerson(queryClient: QueryClient) {
   clearCsrfToken();
+  clearEarlyAnswers();
   queryClient.setQueryData(authKeys.me(), null);
   queryClient.clear();
   window.location.replace(paths.signIn());
