@@ -21,7 +21,17 @@ function forgetPerson(queryClient: QueryClient) {
   clearEarlyAnswers();
   queryClient.setQueryData(authKeys.me(), null);
   queryClient.clear();
-  window.location.replace(paths.signIn());
+  // The sign-in page is asked for once the loading frame has been drawn: the query cache tells the
+  // components in a task of its own, and on a busy phone the next page could otherwise arrive first, with
+  // the person's page still what was on screen. (A hidden tab draws no frames: then after half a second.)
+  let isGone = false;
+  const go = () => {
+    if (isGone) return;
+    isGone = true;
+    window.location.replace(paths.signIn());
+  };
+  requestAnimationFrame(() => setTimeout(go, 0));
+  setTimeout(go, 500);
 }
 
 /**
