@@ -207,6 +207,25 @@ function exitOf(child: ChildProcess): Promise<number | null> {
   return once(child, 'exit').then(([code]) => code as number | null);
 }
 
+/**
+ * Asks `url` (uncompressed) on a raw connection, pauses reading after the first bytes, sends the process
+ * SIGTERM and waits until it has begun to drain (it takes no new connection then).
+ */
+async function downloadPausedAtStop(api: Api, url: string, cookie: string) {
+  const socket = net.connect(Number(new URL(api.base).port), '127.0.0.1');
+  socket.on('error', () => {});
+  const chunks: Buffer[] = [];
+  socket.on('data', (chunk: Buffer) => chunks.push(chunk));
+  socket.write(`GET ${url} HTTP/1.1\r\nHost: 127.0.0.1\r\nCookie: ${cookie}\r\nAccept-Encoding: identity\r\n\r\n`);
+  await once(socket, 'data');
+  socket.pause();
+  api.child.kill('SIGTERM');
+  await expect
+    .poll(() => fetch(`${api.base}/api/health`).then(() => 'still listening', () => 'draining'), { timeout: 5_000 })
+    .toBe('draining');
+  return { socket, chunks };
+}
+
 /** Reads a paused socket slowly to its close, a burst every 40 ms; resolves when it closes. */
 async function readSlowlyToClose(socket: net.Socket): Promise<void> {
   const slowly = setInterval(() => {
@@ -305,19 +324,8 @@ describe('a process told to stop (SIGTERM)', () => {
       const lines = whole.trim().split(/\r?\n/).length;
       expect(lines).toBeGreaterThan(30_000);
 
-      const socket = net.connect(Number(new URL(c.base).port), '127.0.0.1');
-      socket.on('error', () => {});
-      const chunks: Buffer[] = [];
-      socket.on('data', (chunk: Buffer) => chunks.push(chunk));
       // Uncompressed, so the rows cannot all sit in zlib's buffers.
-      socket.write(`GET ${url} HTTP/1.1\r\nHost: 127.0.0.1\r\nCookie: ${admin.cookie}\r\nAccept-Encoding: identity\r\n\r\n`);
-      await once(socket, 'data');
-      socket.pause();
-      c.child.kill('SIGTERM');
-      // The process has begun to drain (no new connections) while this answer waits on the paused reader.
-      await expect
-        .poll(() => fetch(`${c.base}/api/health`).then(() => 'still listening', () => 'draining'), { timeout: 5_000 })
-        .toBe('draining');
+      const { socket, chunks } = await downloadPausedAtStop(c, url, admin.cookie);
       // Read slowly to the end, a burst every 40 ms: the handler ends the answer while its tail still waits
       // in the process's buffers, and the connection must stay open until that tail is out.
       let completeAt = 0;
@@ -360,17 +368,7 @@ describe('a process told to stop (SIGTERM)', () => {
     const size = (await (await fetch(c.base + url, { headers: { cookie: tech.cookie } })).arrayBuffer()).byteLength;
     expect(size).toBeGreaterThan(3_000_000);
 
-    const socket = net.connect(Number(new URL(c.base).port), '127.0.0.1');
-    socket.on('error', () => {});
-    const chunks: Buffer[] = [];
-    socket.on('data', (chunk: Buffer) => chunks.push(chunk));
-    socket.write(`GET ${url} HTTP/1.1\r\nHost: 127.0.0.1\r\nCookie: ${tech.cookie}\r\nAccept-Encoding: identity\r\n\r\n`);
-    await once(socket, 'data');
-    socket.pause();
-    c.child.kill('SIGTERM');
-    await expect
-      .poll(() => fetch(`${c.base}/api/health`).then(() => 'still listening', () => 'draining'), { timeout: 5_000 })
-      .toBe('draining');
+    const { socket, chunks } = await downloadPausedAtStop(c, url, tech.cookie);
     // Past the point where the process stops waiting for handlers (this one ended its answer at once): a
     // connection closed now would lose what is still in the process's buffers.
     await new Promise((r) => setTimeout(r, 800));
