@@ -236,3 +236,17 @@ test('focus stays on the same row when the board switches between table and card
   ).toBe(true);
   await dispatcher.context().close();
 });
+
+test('the board table fits a 1280 px screen beside the navigation, open tickets and closed ones', async ({ browser, baseURL }) => {
+  const page = await newPage(browser, baseURL, { viewport: viewports.desktop });
+  await signIn(page, demoUsers.dispatcher);
+  for (const search of ['', '?status=all']) {
+    await page.goto(`/work-orders${search}`);
+    const table = page.getByRole('table');
+    await expect(table.getByRole('row').nth(1)).toBeVisible();
+    // Its scrolling box: no column (the deadline last of all) may sit beyond the right edge.
+    const box = await table.evaluate((t) => ({ scroll: t.parentElement!.scrollWidth, client: t.parentElement!.clientWidth }));
+    expect(box.scroll, `/work-orders${search}`).toBeLessThanOrEqual(box.client);
+  }
+  await page.context().close();
+});

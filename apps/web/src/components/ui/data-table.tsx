@@ -130,7 +130,7 @@ export function DataTable<T>({
                         key={header.id}
                         scope="col"
                         aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : canSort ? 'none' : undefined}
-                        className={cn('border-b-2 border-edge/50 px-4 py-2 text-sm font-semibold text-ink-muted', header.column.columnDef.meta?.className)}
+                        className={cn('border-b-2 border-edge/50 px-3 py-2 text-sm font-semibold text-ink-muted', header.column.columnDef.meta?.className)}
                       >
                         {header.isPlaceholder ? null : canSort ? (
                           <button
@@ -160,11 +160,11 @@ export function DataTable<T>({
                 <tr key={row.id} data-row-id={row.id} className="border-b border-line last:border-b-0 hover:bg-paper/70">
                   {row.getVisibleCells().map((cell) =>
                     cell.column.columnDef.meta?.isRowHeader ? (
-                      <th key={cell.id} data-column-id={cell.column.id} scope="row" className={cn('px-4 py-3 align-middle font-normal', cell.column.columnDef.meta.className)}>
+                      <th key={cell.id} data-column-id={cell.column.id} scope="row" className={cn('px-3 py-3 align-middle font-normal', cell.column.columnDef.meta.className)}>
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       </th>
                     ) : (
-                      <td key={cell.id} data-column-id={cell.column.id} className={cn('px-4 py-3 align-middle', cell.column.columnDef.meta?.className)}>
+                      <td key={cell.id} data-column-id={cell.column.id} className={cn('px-3 py-3 align-middle', cell.column.columnDef.meta?.className)}>
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       </td>
                     ),

@@ -23,6 +23,7 @@ export function SlaClock({
   size = 'md',
   showAbsolute = true,
   canWrap = false,
+  isCompact = false,
   className,
 }: {
   dueAt: string;
@@ -32,6 +33,8 @@ export function SlaClock({
   showAbsolute?: boolean;
   /** Let the words wrap (narrow table columns); otherwise each line stays whole. */
   canWrap?: boolean;
+  /** A table cell: a stopped clock's "was due" gets a line of its own, so the column stays narrow. */
+  isCompact?: boolean;
   className?: string;
 }) {
   const now = useNow();
@@ -65,7 +68,7 @@ export function SlaClock({
           dateTime={dueAt}
           className={cn('readings text-sm text-ink-muted', !canWrap && 'whitespace-nowrap')}
         >
-          {countdown.state === 'stopped' ? 'was due ' : ''}
+          {countdown.state === 'stopped' ? <span className={cn(isCompact && 'block')}>was due </span> : null}
           {absolute}
         </time>
       ) : null}

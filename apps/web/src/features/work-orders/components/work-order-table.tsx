@@ -142,6 +142,7 @@ const baseColumns = [
         dueAt={info.getValue()}
         status={info.row.original.status}
         timeZone={info.row.original.site.timeZone}
+        isCompact
       />
     ),
     meta: { label: 'Deadline', className: tight },
