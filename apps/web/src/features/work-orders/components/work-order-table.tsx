@@ -20,7 +20,8 @@ function TicketCell({ item }: { item: WorkOrderListItem }) {
       </span>
       <Link
         to={paths.workOrder(item.id)}
-        className="font-semibold text-brand underline-offset-4 hover:underline"
+        // A title may hold a long unbroken token (a pasted path, a serial): it breaks rather than widen the column.
+        className="font-semibold text-brand underline-offset-4 [overflow-wrap:anywhere] hover:underline"
       >
         {item.title}
       </Link>
