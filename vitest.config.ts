@@ -9,7 +9,7 @@ export default defineConfig({
         resolve: { alias: { '@': fileURLToPath(new URL('./apps/web/src', import.meta.url)) } },
         test: {
           name: 'unit',
-          include: ['packages/*/src/**/*.test.ts', 'apps/api/src/**/*.test.ts', 'apps/web/src/**/*.test.{ts,tsx}'],
+          include: ['packages/*/src/**/*.test.ts', 'apps/api/src/**/*.test.ts', 'apps/web/src/**/*.test.{ts,tsx}', 'apps/web/plugins/**/*.test.ts'],
           environment: 'node',
         },
       },

@@ -6,6 +6,7 @@ import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
 import { defineConfig, type Plugin } from 'vite';
 import { VitePWA } from 'vite-plugin-pwa';
+import { coreFonts } from './plugins/core-fonts';
 
 // The API runs on 8080 in development; the browser only ever talks to its own origin, so
 // cookies stay first-party and the API's CSP (`script-src 'self'`) holds for the built app.
@@ -51,7 +52,7 @@ function preloadStartChunks(entries: RegExp, options: { name?: string; fetchPrio
 }
 
 /**
- * `preload` links for the Latin faces every page sets its text in, so that they download beside the
+ * `preload` links for the core faces every page sets its text in (plugins/core-fonts.ts), so that they download beside the
  * stylesheet instead of after the browser has read it and laid out the first text.
  */
 function preloadFonts(files: RegExp): Plugin {
@@ -142,7 +143,8 @@ export default defineConfig({
     // The toaster mounts once the first page has settled (app/provider.tsx), but its code is fetched now, at
     // low priority: a phone that loses signal in between still shows its toasts ("Kept on this phone").
     preloadStartChunks(/[\\/]src[\\/]components[\\/]ui[\\/]app-toaster\.tsx$/, { name: 'toaster', fetchPriority: 'low' }),
-    preloadFonts(/assets\/(inter|space-grotesk)-latin-wght-normal-[\w-]+\.woff2$/),
+    coreFonts({ outDir: fileURLToPath(new URL('./generated/fonts', import.meta.url)), css: fileURLToPath(new URL('./src/fonts.css', import.meta.url)) }),
+    preloadFonts(/assets\/(inter|space-grotesk)-core-wght-normal-[\w-]+\.woff2$/),
     firstPagesManifest(),
     brotliCopies(),
     tailwindcss(),

@@ -1,6 +1,7 @@
 /// <reference types="vite-plugin-pwa/client" />
 import '@fontsource-variable/inter';
 import '@fontsource-variable/space-grotesk';
+import './fonts.css';
 import './styles.css';
 import { startMeEarly } from '@/features/auth/api/get-me';
 import { afterPageSettles } from '@/lib/after-load';

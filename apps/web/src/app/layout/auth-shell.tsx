@@ -12,7 +12,7 @@ export function AuthShell({ title, description, children, footer }: { title: str
         <StringLines />
         <Wordmark className="relative" />
         <p className="relative mt-4 max-w-sm font-display text-xl leading-snug text-on-brand-muted lg:mt-0 lg:text-3xl lg:text-on-brand">
-          DC string faults, from work order to sign&#8209;off.
+          DC string faults, from work order to <span className="whitespace-nowrap">sign-off</span>.
         </p>
         <p className="relative hidden text-on-brand-muted lg:block">For operations and maintenance crews.</p>
       </header>
