@@ -22,9 +22,9 @@ const token = (name: string, fallback: string) => new RegExp(`--color-${name}:\\
  * imports dynamically on every start (src/app/start.tsx and what it needs), so they download in
  * parallel with the entry instead of after it has run.
  */
-function preloadStartChunks(entries: RegExp, options: { name?: string; fetchPriority?: 'low' } = {}): Plugin {
+function preloadStartChunks(entries: RegExp): Plugin {
   return {
-    name: `stringfield:preload-${options.name ?? 'start-chunks'}`,
+    name: 'stringfield:preload-start-chunks',
     apply: 'build',
     transformIndexHtml: {
       order: 'post',
@@ -43,7 +43,7 @@ function preloadStartChunks(entries: RegExp, options: { name?: string; fetchPrio
           .filter((file) => !html.includes(`/${file}"`))
           .map((file) => ({
             tag: 'link',
-            attrs: { rel: 'modulepreload', crossorigin: true, ...(options.fetchPriority ? { fetchpriority: options.fetchPriority } : {}), href: `/${file}` },
+            attrs: { rel: 'modulepreload', crossorigin: true, href: `/${file}` },
             injectTo: 'head' as const,
           }));
       },
@@ -140,9 +140,6 @@ export default defineConfig({
   plugins: [
     react(),
     preloadStartChunks(/[\\/]src[\\/]app[\\/]start\.tsx$/),
-    // The toaster mounts once the first page has settled (app/provider.tsx), but its code is fetched now, at
-    // low priority: a phone that loses signal in between still shows its toasts ("Kept on this phone").
-    preloadStartChunks(/[\\/]src[\\/]components[\\/]ui[\\/]app-toaster\.tsx$/, { name: 'toaster', fetchPriority: 'low' }),
     coreFonts({ outDir: fileURLToPath(new URL('./generated/fonts', import.meta.url)), css: fileURLToPath(new URL('./src/fonts.css', import.meta.url)) }),
     preloadFonts(/assets\/(inter|space-grotesk)-core-wght-normal-[\w-]+\.woff2$/),
     firstPagesManifest(),

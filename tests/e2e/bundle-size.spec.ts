@@ -18,7 +18,7 @@ const dist = process.env.WEB_DIST ?? path.resolve(path.dirname(fileURLToPath(imp
 const fieldRoute = 'src/app/routes/field-checks.tsx';
 const appStart = 'src/app/start.tsx';
 const checkQueueSync = 'src/features/field-checks/components/check-queue-sync.tsx';
-// Preloaded from index.html on every start (at low priority) and mounted once the first page has settled.
+// Downloaded and mounted once the first page has settled; still counted, as every page has it a second later.
 const toaster = 'src/components/ui/app-toaster.tsx';
 
 type ManifestChunk = { file: string; isEntry?: boolean; imports?: string[]; css?: string[] };

@@ -5,6 +5,7 @@ import { del, get, set } from 'idb-keyval';
 import { lazy, Suspense, useEffect, useState, type ReactNode } from 'react';
 import type { SessionUser } from '@stringfield/shared';
 import { authKeys } from '@/features/auth/api/keys';
+import type * as ToasterModule from '@/components/ui/app-toaster';
 import { afterPageSettles } from '@/lib/after-load';
 import { clearEarlyAnswers } from '@/lib/early-answers';
 import { createQueryClient } from '@/lib/query-client';
@@ -19,10 +20,32 @@ import {
   type KeyValueStore,
 } from '@/lib/query-persistence';
 
-// Toasts only follow something a person did; the toaster (and Sonner) mount once the first page has
-// settled (a toast asked for before then waits for it, see lib/toast.ts). Its code is preloaded at low
-// priority from index.html (vite.config.ts), so it is there even if the signal goes in between.
-const AppToaster = lazy(async () => ({ default: (await import('@/components/ui/app-toaster')).AppToaster }));
+// Toasts only follow something a person did; the toaster (and Sonner) download and mount once the first
+// page has settled, so that on a slow connection they do not compete with its code and data (a toast asked
+// for before then waits for it, see lib/toast.ts). Once the service worker holds the app, they come from
+// the phone.
+const RETRY_TOASTER_MS = 15_000;
+
+/**
+ * The toaster's code. A download that fails (no signal on a first visit, before the service worker holds
+ * the app) is tried again when the phone is back online or a while later, never an error on screen;
+ * toasts asked for meanwhile wait and show then.
+ */
+function importToaster(): Promise<typeof ToasterModule> {
+  return import('@/components/ui/app-toaster').catch(
+    () =>
+      new Promise<typeof ToasterModule>((resolve) => {
+        const again = () => {
+          clearTimeout(timer);
+          window.removeEventListener('online', again);
+          resolve(importToaster());
+        };
+        const timer = setTimeout(again, RETRY_TOASTER_MS);
+        window.addEventListener('online', again);
+      }),
+  );
+}
+const AppToaster = lazy(async () => ({ default: (await importToaster()).AppToaster }));
 
 const idb: KeyValueStore = { get: (key) => get(key), set: (key, value) => set(key, value), del: (key) => del(key) };
 const cacheOwner = createCacheOwner(typeof window === 'undefined' ? null : window.localStorage);
