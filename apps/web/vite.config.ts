@@ -6,7 +6,7 @@ import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
 import { defineConfig, type Plugin } from 'vite';
 import { VitePWA } from 'vite-plugin-pwa';
-import { coreFonts } from './plugins/core-fonts';
+import { coreFonts } from './plugins/core-fonts.ts';
 
 // The API runs on 8080 in development; the browser only ever talks to its own origin, so
 // cookies stay first-party and the API's CSP (`script-src 'self'`) holds for the built app.
