@@ -45,7 +45,8 @@ export const insulationTestVoltages = [250, 500, 1000, 1500] as const;
 
 const measured = (label: string, unit: string, min: number, max: number) =>
   z
-    .number({ error: `${label} must be a number in ${unit}` })
+    // Nothing typed asks for the reading; something typed that is not a number says so.
+    .number({ error: (issue) => (issue.input === undefined ? `Enter the ${label} in ${unit}` : `${label} must be a number in ${unit}`) })
     .finite(`${label} must be a number in ${unit}`)
     .min(min, `${label} must be at least ${min} ${unit}`)
     .max(max, `${label} can be at most ${max} ${unit}`);

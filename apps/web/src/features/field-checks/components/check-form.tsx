@@ -18,6 +18,7 @@ import { toast } from '@/lib/toast';
 import type { z } from 'zod';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/dialog';
 import { FormField, Select, Textarea } from '@/components/ui/form-field';
 import { Icon } from '@/components/ui/icon';
 import { paths } from '@/config/paths';
@@ -110,8 +111,9 @@ export function CheckForm({
     handleSubmit,
     setValue,
     setError,
-    formState: { errors, isSubmitting },
+    formState: { errors, isSubmitting, isDirty },
   } = form;
+  const [isDiscarding, setIsDiscarding] = useState(false);
   const values = useWatch({ control }) as Partial<CheckFormValues>;
   const today = localDay();
   const instrumentList = useMemo(() => instruments.data ?? [], [instruments.data]);
@@ -215,7 +217,7 @@ export function CheckForm({
         ) : null}
         <div className="grid gap-4 sm:grid-cols-2">
           <ReadingField label="Irradiance" unit="W/m²" isOptional error={errors.irradianceWm2?.message} {...register('irradianceWm2', { setValueAs: parseDecimal })} />
-          <FormField label="Irradiance measured with" error={errors.irradianceMethod?.message}>
+          <FormField label="Irradiance measured with" hint="Needed with an irradiance reading." error={errors.irradianceMethod?.message}>
             <Select {...register('irradianceMethod', { setValueAs: emptyToUndefined })}>
               <option value="">Choose…</option>
               {irradianceMethods.map((m) => (
@@ -226,7 +228,7 @@ export function CheckForm({
             </Select>
           </FormField>
           <ReadingField label="Module temperature" unit="°C" isOptional error={errors.moduleTempC?.message} {...register('moduleTempC', { setValueAs: parseDecimal })} />
-          <FormField label="Module temperature taken" error={errors.moduleTempMethod?.message}>
+          <FormField label="Module temperature taken" hint="Needed with a module temperature." error={errors.moduleTempMethod?.message}>
             <Select {...register('moduleTempMethod', { setValueAs: emptyToUndefined })}>
               <option value="">Choose…</option>
               {moduleTempMethods.map((m) => (
@@ -290,7 +292,7 @@ export function CheckForm({
         <div className="grid gap-4 sm:grid-cols-3">
           <ReadingField label="Plus to earth" unit="MΩ" isOptional error={errors.insulationPlusMOhm?.message} {...register('insulationPlusMOhm', { setValueAs: parseDecimal })} />
           <ReadingField label="Minus to earth" unit="MΩ" isOptional error={errors.insulationMinusMOhm?.message} {...register('insulationMinusMOhm', { setValueAs: parseDecimal })} />
-          <FormField label="Test voltage" error={errors.insulationTestVoltageV?.message}>
+          <FormField label="Test voltage" hint="Needed with an insulation reading." error={errors.insulationTestVoltageV?.message}>
             <Select {...register('insulationTestVoltageV', { setValueAs: parseOptionalInt })}>
               <option value="">Choose…</option>
               {insulationTestVoltages.map((v) => (
@@ -329,14 +331,23 @@ export function CheckForm({
 
       <div aria-live="assertive">{formError ? <Alert tone="fail">{formError}</Alert> : null}</div>
 
-      <div className="sticky bottom-20 z-10 -mx-4 flex flex-col gap-2 border-t-2 border-line bg-paper/95 px-4 py-3 backdrop-blur sm:static sm:mx-0 sm:flex-row sm:border-0 sm:bg-transparent sm:p-0 lg:bottom-0">
-        <Button type="submit" variant="primary" size="lg" isPending={isSubmitting} className="sm:flex-1">
+      {/* One row on a phone, so the bar above the tab bar keeps most of the screen for the readings. */}
+      <div className="sticky bottom-20 z-10 -mx-4 flex gap-2 border-t-2 border-line bg-paper/95 px-4 py-2 backdrop-blur sm:static sm:mx-0 sm:border-0 sm:bg-transparent sm:p-0 lg:bottom-0">
+        <Button type="submit" variant="primary" size="lg" isPending={isSubmitting} className="flex-1">
           {isSubmitting ? 'Saving…' : isCorrection ? 'Save the correction' : 'Save check'}
         </Button>
-        <Button variant="secondary" size="lg" onClick={onCancel} disabled={isSubmitting}>
+        <Button variant="secondary" size="lg" onClick={() => (isDirty ? setIsDiscarding(true) : onCancel())} disabled={isSubmitting} className="px-4">
           Cancel
         </Button>
       </div>
+      <ConfirmDialog
+        isOpen={isDiscarding}
+        onClose={() => setIsDiscarding(false)}
+        onConfirm={onCancel}
+        title={isCorrection ? 'Discard the correction?' : 'Discard these readings?'}
+        description="What you typed in this form is not saved anywhere."
+        confirmLabel={isCorrection ? 'Discard the correction' : 'Discard the readings'}
+      />
     </form>
   );
 }

@@ -39,7 +39,11 @@ export function LivePreview({ preview, vocV, iscA, moduleName, modulesInSeries }
       {/* Polite: the verdict changes as digits are typed, and a screen reader should hear where it settles. */}
       <div aria-live="polite" aria-atomic="true" className="mt-3">
         {preview === null ? (
-          <p className="text-base text-ink-muted">Type the Voc to see the expected values and the verdict.</p>
+          <p className="text-base text-ink-muted">
+            {vocV === undefined
+              ? 'Type the Voc to see the expected values and the verdict.'
+              : 'The Voc typed is not a reading that can be judged (see the message under it); correct it to see the expected values and the verdict.'}
+          </p>
         ) : (
           <>
             <table className="w-full text-base">

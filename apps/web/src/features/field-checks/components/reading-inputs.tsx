@@ -1,5 +1,6 @@
 import type { ComponentProps, ReactNode } from 'react';
 import { FormField, Input } from '@/components/ui/form-field';
+import { Icon } from '@/components/ui/icon';
 import { cn } from '@/lib/cn';
 
 /**
@@ -80,7 +81,9 @@ export function ChoiceGroup<V extends string | boolean>({
                 'flex cursor-pointer items-center justify-center gap-2 rounded-control border-2 px-3 text-center font-semibold',
                 'has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-offset-2 has-[:focus-visible]:outline-focus',
                 isLarge ? 'min-h-16 text-lg' : 'min-h-touch',
-                !isChecked && 'border-edge bg-surface text-ink hover:bg-sunken',
+                !isChecked && !error && 'border-edge bg-surface text-ink hover:bg-sunken',
+                // Unanswered and required: the same red edge and tint as a text field in error.
+                !isChecked && error && 'border-fail bg-fail-soft/40 text-ink hover:bg-sunken',
                 isChecked && tone === 'neutral' && 'border-brand bg-brand text-on-brand',
                 isChecked && tone === 'pass' && 'border-pass bg-pass text-white',
                 isChecked && tone === 'fail' && 'border-fail bg-fail text-white',
@@ -100,8 +103,9 @@ export function ChoiceGroup<V extends string | boolean>({
       </div>
       <div aria-live="polite">
         {error ? (
-          <p id={errorId} className="text-base font-medium text-fail">
-            {error}
+          <p id={errorId} className="flex items-start gap-1.5 text-base font-medium text-fail">
+            <Icon name="fail" className="mt-0.5 size-5" />
+            <span>{error}</span>
           </p>
         ) : null}
       </div>

@@ -29,6 +29,12 @@ describe('parseDecimal', () => {
     expect(result.success).toBe(false);
     expect(result.error?.issues[0]?.message).toBe('Voc must be a number in V');
   });
+
+  it('asks for a required reading left blank, rather than calling it not a number', () => {
+    const result = stringCheckInputSchema.safeParse({ ...buildCheckInput(), vocV: parseDecimal('') });
+    expect(result.success).toBe(false);
+    expect(result.error?.issues[0]?.message).toBe('Enter the Voc in V');
+  });
 });
 
 describe('toCheckPayload', () => {
