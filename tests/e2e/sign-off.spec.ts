@@ -174,6 +174,15 @@ test('a missing after photo blocks sign-off; once added, the supervisor signs of
   const comment = 'After photos of both strings in; both after checks pass at STC.';
   await signOffPanel.getByLabel('Comment').fill(comment);
   await signOffPanel.getByRole('button', { name: `Sign off ${number}` }).click();
+  // Irreversible, so asked once; dismissing the question changes nothing.
+  const confirm = reviewer.getByRole('dialog', { name: `Sign off ${number}?` });
+  await expect(confirm).toContainText('cannot be reopened');
+  await confirm.getByRole('button', { name: 'Cancel' }).click();
+  await expect(confirm).toHaveCount(0);
+  await expect(signOffPanel.getByRole('button', { name: `Sign off ${number}` })).toBeVisible();
+  await signOffPanel.getByRole('button', { name: `Sign off ${number}` }).click();
+  await reviewer.getByRole('dialog', { name: `Sign off ${number}?` }).getByRole('button', { name: 'Sign off', exact: true }).click();
+  await expect(reviewer.getByText(`${number} signed off`, { exact: true })).toBeVisible();
   await expect(signOffPanel.getByText('Signed off by')).toBeVisible();
   await expect(reviewer.getByText('Signed off', { exact: true }).first()).toBeVisible();
   const { signOff } = await dispatcher.get<{ signOff: SignOff }>(`/api/work-orders/${ticketId}/sign-off`);

@@ -14,20 +14,26 @@ export function SignOffChecklist({
   workOrderId,
   canWork,
   renderOverride,
+  isDue = true,
 }: {
   gates: readonly Gate[];
   workOrderId: number;
   canWork: boolean;
   renderOverride?: (item: MissingItem) => ReactNode;
+  /** Whether sign-off is due (the ticket awaits it): what is not in yet is then missing, before that only to do. */
+  isDue?: boolean;
 }) {
   return (
     <ul className="flex flex-col divide-y divide-line rounded-card border border-line bg-surface" aria-label="Sign-off checklist">
       {gates.map((gate) => (
         <li key={gate.code} className="flex flex-col gap-2 p-3 sm:p-4">
           <p className="flex items-start gap-2">
-            <Icon name={gate.ok ? 'check' : 'fail'} className={cn('mt-0.5 size-6 shrink-0', gate.ok ? 'text-pass' : 'text-fail')} />
+            <Icon
+              name={gate.ok ? 'check' : isDue ? 'fail' : 'clock'}
+              className={cn('mt-0.5 size-6 shrink-0', gate.ok ? 'text-pass' : isDue ? 'text-fail' : 'text-ink-muted')}
+            />
             <span className="min-w-0">
-              <span className={cn('mr-1 font-bold', gate.ok ? 'text-pass' : 'text-fail')}>{gate.ok ? 'Done:' : 'Missing:'}</span>
+              <span className={cn('mr-1 font-bold', gate.ok ? 'text-pass' : isDue ? 'text-fail' : 'text-ink-muted')}>{gate.ok ? 'Done:' : isDue ? 'Missing:' : 'To do:'}</span>
               <span className="font-semibold">{gate.label}</span>
             </span>
           </p>

@@ -1,13 +1,15 @@
-import { signOffInputSchema, type Role, type WorkOrderStatus } from '@stringfield/shared';
+import { signOffInputSchema, type Role, type SignOffInput, type WorkOrderStatus } from '@stringfield/shared';
 import { useId, useRef, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/dialog';
 import { ErrorState } from '@/components/ui/error-state';
 import { FormField, Textarea } from '@/components/ui/form-field';
 import { Icon } from '@/components/ui/icon';
 import { LoadingRegion, Skeleton } from '@/components/ui/skeleton';
 import { isApiError } from '@/lib/api-client';
 import { cn } from '@/lib/cn';
+import { toast } from '@/lib/toast';
 import { useGates } from '../api/get-gates';
 import { useSignOff } from '../api/get-sign-off';
 import { gatesOfConflict, useSignOffWorkOrder } from '../api/sign-off-work-order';
@@ -93,6 +95,8 @@ export function SignOffPanel({
   const [comment, setComment] = useState('');
   const [formError, setFormError] = useState<{ message: string; isStale: boolean } | null>(null);
   const [announcement, setAnnouncement] = useState('');
+  const [confirming, setConfirming] = useState<SignOffInput | null>(null);
+  const panelRef = useRef<HTMLDivElement>(null);
   const formErrorRef = useRef<HTMLDivElement>(null);
   const canSignOff = role === 'supervisor' && ticket.status === 'awaiting_signoff';
 
@@ -111,15 +115,27 @@ export function SignOffPanel({
       setFormError({ message: parsed.error.issues[0]?.message ?? 'Check the form.', isStale: false });
       return;
     }
+    // Signing off closes the ticket for good: ask once, with what it does.
+    setConfirming(parsed.data);
+  };
+
+  const confirmSignOff = () => {
+    if (!confirming) return;
+    const built = buildOverrides(reasons, overridableItems(gates.data?.gates ?? []).map((o) => o.stringId));
     setAnnouncement('Signing off…');
-    signOff.mutate(parsed.data, {
+    signOff.mutate(confirming, {
       onSuccess: () => {
+        setConfirming(null);
         setAnnouncement(`${ticket.number} signed off.`);
+        toast.success(`${ticket.number} signed off`, { description: 'The ticket is closed and its close-out report is final.' });
         setReasons({});
         setComment('');
         onSignedOff();
+        // The form gives way to the sign-off record; take the reader there rather than leave them further down.
+        requestAnimationFrame(() => panelRef.current?.focus());
       },
       onError: (error) => {
+        setConfirming(null);
         if (isApiError(error) && error.fields) {
           const mapped = mapOverrideFieldErrors(error.fields, built.overrides);
           setReasonErrors(mapped.byString);
@@ -172,6 +188,11 @@ export function SignOffPanel({
             <>
               <Icon name="check" className="size-6 text-pass" /> All evidence is in.
             </>
+          ) : ticket.status !== 'awaiting_signoff' ? (
+            <>
+              <Icon name="clock" className="size-6 text-ink-muted" />
+              {`${remaining} ${remaining === 1 ? 'item' : 'items'} to do before sign-off.`}
+            </>
           ) : (
             <>
               <Icon name="alert" className="size-6 text-attention" />
@@ -182,6 +203,7 @@ export function SignOffPanel({
         </p>
         <SignOffChecklist
           gates={gates.data.gates}
+          isDue={ticket.status === 'awaiting_signoff'}
           workOrderId={ticket.id}
           canWork={canWork}
           renderOverride={
@@ -235,11 +257,21 @@ export function SignOffPanel({
   }
 
   return (
-    <div className="flex flex-col gap-3">
+    <div ref={panelRef} tabIndex={-1} className="flex scroll-mt-20 flex-col gap-3 focus:outline-none">
       <p role="status" aria-live="polite" className="sr-only">
         {announcement}
       </p>
       {body}
+      <ConfirmDialog
+        isOpen={confirming !== null}
+        onClose={() => setConfirming(null)}
+        onConfirm={confirmSignOff}
+        isPending={signOff.isPending}
+        tone="primary"
+        title={`Sign off ${ticket.number}?`}
+        description="The ticket closes and its close-out report becomes final, with your name on it. A signed-off ticket cannot be reopened; a new fault on these strings needs a new ticket."
+        confirmLabel="Sign off"
+      />
     </div>
   );
 }
