@@ -90,7 +90,7 @@ export const transitionRules: readonly TransitionRule[] = [
     to: 'cancelled',
     action: 'workOrders:cancel',
     needsReason: true,
-    label: 'Cancel',
+    label: 'Cancel ticket',
   },
 ];
 

@@ -11,7 +11,7 @@ const inverters: DatasheetLibraryKind<InverterModel> = {
   noun: 'inverter',
   plural: 'inverters',
   archivedFor: 'inverters',
-  searchPlaceholder: 'Maker or model, like SDI-125K',
+  searchPlaceholder: 'Maker or model',
   errorTitle: 'Inverter datasheets did not load',
   emptyTitle: 'No inverter datasheets yet',
   emptyDescription: 'Add the inverters of your plants before registering them.',

@@ -11,7 +11,7 @@ const modules: DatasheetLibraryKind<ModuleModel> = {
   noun: 'module',
   plural: 'modules',
   archivedFor: 'strings',
-  searchPlaceholder: 'Maker or model, like SDM-405',
+  searchPlaceholder: 'Maker or model',
   errorTitle: 'Module datasheets did not load',
   emptyTitle: 'No module datasheets yet',
   emptyDescription: 'Add the modules of your plants before importing their layouts.',

@@ -14,7 +14,7 @@ export function datasheetTitleColumn<T extends DatasheetRow>(column: ColumnHelpe
     header,
     cell: (info) => (
       <div className="min-w-0">
-        <span className="font-semibold">{info.getValue()}</span>
+        <span className="font-semibold whitespace-nowrap">{info.getValue()}</span>
         {info.row.original.isArchived ? (
           <Badge tone="neutral" icon="lock" className="ml-2 align-middle">
             Archived
@@ -23,7 +23,8 @@ export function datasheetTitleColumn<T extends DatasheetRow>(column: ColumnHelpe
         <span className="block text-sm text-ink-muted">{subtitle(info.row.original)}</span>
       </div>
     ),
-    meta: { isCardTitle: true },
+    // The column people read first: wide enough on a desktop that the model and its maker do not wrap.
+    meta: { isCardTitle: true, className: 'md:min-w-48' },
   });
 }
 
@@ -42,7 +43,7 @@ export function datasheetTrailingColumns<T extends DatasheetRow>(
     column.display({
       id: 'actions',
       header: () => <span className="sr-only">Actions</span>,
-      cell: (info) => <LibraryRowActions item={info.row.original} />,
+      cell: (info) => <LibraryRowActions item={info.row.original} isInUse={usedBy.count(info.row.original) > 0} />,
       meta: { className: 'md:w-px md:whitespace-nowrap' },
     }),
   ];

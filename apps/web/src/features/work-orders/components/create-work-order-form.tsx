@@ -102,6 +102,9 @@ export function CreateWorkOrderForm({
     formState: { errors },
   } = useForm<FormInput, unknown, FormOutput>({
     resolver: zodResolver(createWorkOrderInputSchema),
+    // Fields register as they appear (the site list after it loads), so the form's own choice of the first
+    // field in error would not be the first on screen; `focusFirstError` takes them in page order.
+    shouldFocusError: false,
     defaultValues: {
       siteId: initialSiteId,
       strings: [],
@@ -135,6 +138,11 @@ export function CreateWorkOrderForm({
     if (!isSelected && index !== -1) picked.remove(index);
   };
 
+  const focusFirstError = (_errors: unknown, event?: { target: EventTarget | null }) => {
+    const form = event?.target;
+    if (form instanceof HTMLFormElement) requestAnimationFrame(() => form.querySelector<HTMLElement>('[aria-invalid="true"]')?.focus());
+  };
+
   const onSubmit = handleSubmit((values) => {
     create.mutate(values, {
       onSuccess: ({ items }) => onCreated(items),
@@ -150,7 +158,7 @@ export function CreateWorkOrderForm({
         if (split.formError) setError('root', { type: 'server', message: split.formError });
       },
     });
-  });
+  }, focusFirstError);
 
   const hours = sla.data?.[priority];
   const dueAt = hours ? new Date(now + hours * 3_600_000).toISOString() : undefined;
@@ -284,7 +292,7 @@ export function CreateWorkOrderForm({
                       <input
                         type="radio"
                         value={value}
-                        className="mt-1 size-5 accent-brand"
+                        className="mt-1 size-6 accent-brand"
                         {...register('mode')}
                       />
                       <span>

@@ -46,7 +46,7 @@ export function StringPicker({
         <Input
           type="search"
           aria-label="Search strings by label"
-          placeholder="Search labels, like INV07 or S12"
+          placeholder="Label, like INV07-MPPT3"
           className="pl-10"
           value={query}
           autoComplete="off"
@@ -100,7 +100,7 @@ export function StringPicker({
             <label className="flex min-h-touch cursor-pointer items-center gap-3 font-semibold">
               <input
                 type="checkbox"
-                className="size-5 accent-brand"
+                className="size-6 accent-brand"
                 checked={allOnPage}
                 onChange={(event) => inService.forEach((s) => onToggle(s, event.target.checked))}
               />
@@ -124,7 +124,7 @@ export function StringPicker({
                 >
                   <input
                     type="checkbox"
-                    className="size-5 shrink-0 accent-brand"
+                    className="size-6 shrink-0 accent-brand"
                     checked={selectedIds.has(s.id)}
                     disabled={s.isArchived}
                     onChange={(event) => onToggle(s, event.target.checked)}

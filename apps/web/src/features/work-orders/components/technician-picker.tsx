@@ -70,7 +70,7 @@ export function TechnicianPicker({
                     value={tech.id}
                     checked={isChecked}
                     onChange={() => onChange(tech.id)}
-                    className="size-5 accent-brand"
+                    className="size-6 accent-brand"
                   />
                   <span className="min-w-0 flex-1">
                     <span className="font-semibold">{tech.name}</span>

@@ -46,7 +46,8 @@ export function TransitionBar({
             onClick={() => onAction(action)}
             isPending={isPending}
             disabled={pendingTo !== undefined}
-            className="w-full sm:w-auto"
+            // Cancelling the ticket stands apart from the steps that move it on.
+            className={cn('w-full sm:w-auto', action.variant === 'danger' && 'mt-4 sm:mt-0 sm:ml-auto')}
           >
             {isPending || !icon ? null : <Icon name={icon} />}
             {/* The ellipsis says a question comes before anything happens. */}

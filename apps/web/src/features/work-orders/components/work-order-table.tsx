@@ -49,7 +49,7 @@ function SelectCell({ item }: { item: WorkOrderListItem }) {
     <label className="-m-2 flex min-h-touch min-w-touch cursor-pointer items-center md:justify-center">
       <input
         type="checkbox"
-        className="size-5 accent-brand"
+        className="size-6 accent-brand"
         checked={selected.has(item.id)}
         onChange={(event) => onToggle(item, event.target.checked)}
       />
@@ -73,7 +73,7 @@ function SelectPageHeader() {
       <input
         ref={ref}
         type="checkbox"
-        className="size-5 accent-brand"
+        className="size-6 accent-brand"
         checked={isAll}
         onChange={(event) => onTogglePage(event.target.checked)}
       />

@@ -16,12 +16,12 @@ const t = (
 describe('transitionActions', () => {
   it('shows a dispatcher Dispatch first and Cancel last on a reported ticket', () => {
     const actions = transitionActions(
-      [t('cancelled', 'Cancel', { needsReason: true }), t('dispatched', 'Dispatch', { needsAssignee: true })],
+      [t('cancelled', 'Cancel ticket', { needsReason: true }), t('dispatched', 'Dispatch', { needsAssignee: true })],
       'reported',
     );
     expect(actions.map((a) => [a.label, a.kind, a.variant])).toEqual([
       ['Dispatch', 'assign', 'primary'],
-      ['Cancel', 'reason', 'danger'],
+      ['Cancel ticket', 'reason', 'danger'],
     ]);
   });
 
