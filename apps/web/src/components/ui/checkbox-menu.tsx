@@ -85,7 +85,7 @@ export function CheckboxMenu<T extends string>({
             >
               <input
                 type="checkbox"
-                className="size-5 accent-brand"
+                className="size-6 accent-brand"
                 checked={value.includes(option.value)}
                 onChange={(event) =>
                   onChange(

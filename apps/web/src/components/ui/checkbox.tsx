@@ -15,7 +15,7 @@ export function Checkbox({
         className,
       )}
     >
-      <input type="checkbox" className="size-5 shrink-0 accent-brand" {...props} />
+      <input type="checkbox" className="size-6 shrink-0 accent-brand" {...props} />
       <span className="min-w-0">
         <span className="block text-ink">{label}</span>
         {hint ? <span className="block text-sm text-ink-muted">{hint}</span> : null}
