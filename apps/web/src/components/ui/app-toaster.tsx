@@ -18,12 +18,13 @@ export function AppToaster() {
       offset={16}
       toastOptions={{
         classNames: {
-          toast: '!rounded-card !border-2 !border-edge !bg-surface !text-ink !text-base !font-sans !shadow-raised !p-4',
+          toast: '!rounded-card !border-2 !border-edge !bg-surface !text-ink !text-base !font-sans !shadow-raised !p-4 !pr-14',
           title: '!font-semibold',
           description: '!text-ink-muted',
           success: '!border-pass',
           error: '!border-fail',
-          closeButton: '!border-edge !bg-surface !text-ink',
+          // Inside the toast's corner and big enough for a thumb (Sonner's own is 20 px, astride the corner).
+          closeButton: '!top-2 !right-2 !left-auto !size-10 ![transform:none] !border-edge !bg-surface !text-ink [&>svg]:!size-5',
         },
       }}
     />

@@ -227,7 +227,7 @@ export function SignOffPanel({
         />
         {canSignOff ? (
           <div className="flex flex-col gap-4 border-t border-line pt-4">
-            <FormField label="Comment" isOptional hint="Goes into the close-out report.">
+            <FormField label="Comment for the close-out report" isOptional hint="The asset owner reads it in the report.">
               <Textarea rows={3} maxLength={2000} value={comment} onChange={(e) => setComment(e.target.value)} />
             </FormField>
             <div ref={formErrorRef} tabIndex={-1} className="empty:hidden focus:outline-none">

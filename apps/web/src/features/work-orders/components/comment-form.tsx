@@ -41,8 +41,8 @@ export function CommentForm({ workOrderId }: { workOrderId: number }) {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3">
       <FormField
-        label="Add a comment"
-        hint="Mention someone with @ and the start of their e-mail, like @rosa.quill."
+        label="Add a note to the history"
+        hint="For the team on this ticket; it does not go into the close-out report. Mention someone with @ and the start of their e-mail, like @rosa.quill."
         error={errors.body?.message}
       >
         <Textarea rows={3} maxLength={5000} {...register('body')} />
