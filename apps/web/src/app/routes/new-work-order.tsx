@@ -1,5 +1,7 @@
 import { useNavigate, useSearchParams } from 'react-router';
 import { toast } from '@/lib/toast';
+import { ButtonLink } from '@/components/ui/button';
+import { Icon } from '@/components/ui/icon';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { CreateWorkOrderForm } from '@/features/work-orders/components/create-work-order-form';
@@ -16,6 +18,11 @@ export function NewWorkOrderRoute() {
 
   return (
     <div className="mx-auto max-w-5xl">
+      <nav aria-label="Breadcrumb" className="mb-2">
+        <ButtonLink to={paths.workOrders()} variant="ghost" className="-ml-4 text-brand">
+          <Icon name="chevronLeft" /> Work orders
+        </ButtonLink>
+      </nav>
       <PageHeader
         title="New work order"
         description="Report a DC string fault so it can be dispatched, repaired and signed off."
