@@ -3,7 +3,7 @@ import { cn } from '@/lib/cn';
 
 /** A grey placeholder block in the shape of content that is on its way. */
 export function Skeleton({ className }: { className?: string }) {
-  return <div aria-hidden="true" className={cn('animate-shimmer rounded-control bg-sunken', className)} />;
+  return <div aria-hidden="true" className={cn('animate-shimmer rounded-control bg-line', className)} />;
 }
 
 /** Wraps skeletons so assistive technology hears one "Loading …" instead of a pile of empty boxes. */
