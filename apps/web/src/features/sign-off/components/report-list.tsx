@@ -24,7 +24,8 @@ export function ReportList({ items }: { items: readonly WorkOrderListItem[] }) {
     <ul className="flex flex-col gap-3">
       {items.map((t) => (
         <li key={t.id} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4 shadow-card sm:flex-row sm:items-center sm:justify-between">
-          <div className="min-w-0">
+          {/* Grows to the card's width, so every card's two columns of facts start at the same place. */}
+          <div className="min-w-0 sm:flex-1">
             <p className="readings text-sm font-semibold tracking-wide text-brand uppercase">{t.number}</p>
             <h3 className="text-lg font-semibold [overflow-wrap:anywhere]">
               <Link to={paths.workOrder(t.id)} className="underline-offset-4 hover:underline">
@@ -42,7 +43,17 @@ export function ReportList({ items }: { items: readonly WorkOrderListItem[] }) {
               </div>
               <div className="flex gap-1">
                 <dt className="text-ink-muted">{t.stringLabels.length === 1 ? 'String' : 'Strings'}</dt>
-                <dd className="readings [overflow-wrap:anywhere]">{t.stringLabels.join(', ') || '—'}</dd>
+                <dd className="readings min-w-0">
+                  {/* Lines break between labels, not inside one at its hyphens. */}
+                  {t.stringLabels.length === 0
+                    ? '—'
+                    : t.stringLabels.map((label, i) => (
+                        <span key={label}>
+                          {i > 0 ? ', ' : null}
+                          <span className="whitespace-nowrap">{label}</span>
+                        </span>
+                      ))}
+                </dd>
               </div>
               <div className="flex gap-1">
                 <dt className="text-ink-muted">Fault</dt>
