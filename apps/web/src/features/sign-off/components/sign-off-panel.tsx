@@ -98,7 +98,8 @@ export function SignOffPanel({
   const [confirming, setConfirming] = useState<SignOffInput | null>(null);
   const panelRef = useRef<HTMLDivElement>(null);
   const formErrorRef = useRef<HTMLDivElement>(null);
-  const canSignOff = role === 'supervisor' && ticket.status === 'awaiting_signoff';
+  const isDue = ticket.status === 'awaiting_signoff';
+  const canSignOff = role === 'supervisor' && isDue;
 
   const submit = () => {
     const current = gates.data?.gates ?? [];
@@ -121,9 +122,9 @@ export function SignOffPanel({
 
   const confirmSignOff = () => {
     if (!confirming) return;
-    const built = buildOverrides(reasons, overridableItems(gates.data?.gates ?? []).map((o) => o.stringId));
+    const sent = confirming;
     setAnnouncement('Signing off…');
-    signOff.mutate(confirming, {
+    signOff.mutate(sent, {
       onSuccess: () => {
         setConfirming(null);
         setAnnouncement(`${ticket.number} signed off.`);
@@ -137,7 +138,8 @@ export function SignOffPanel({
       onError: (error) => {
         setConfirming(null);
         if (isApiError(error) && error.fields) {
-          const mapped = mapOverrideFieldErrors(error.fields, built.overrides);
+          // Field errors name overrides by their place in what was sent.
+          const mapped = mapOverrideFieldErrors(error.fields, sent.overrides);
           setReasonErrors(mapped.byString);
         }
         const hasGates = gatesOfConflict(error) !== undefined;
@@ -188,7 +190,7 @@ export function SignOffPanel({
             <>
               <Icon name="check" className="size-6 text-pass" /> All evidence is in.
             </>
-          ) : ticket.status !== 'awaiting_signoff' ? (
+          ) : !isDue ? (
             <>
               <Icon name="clock" className="size-6 text-ink-muted" />
               {`${remaining} ${remaining === 1 ? 'item' : 'items'} to do before sign-off.`}
@@ -203,7 +205,7 @@ export function SignOffPanel({
         </p>
         <SignOffChecklist
           gates={gates.data.gates}
-          isDue={ticket.status === 'awaiting_signoff'}
+          isDue={isDue}
           workOrderId={ticket.id}
           canWork={canWork}
           renderOverride={
@@ -247,7 +249,7 @@ export function SignOffPanel({
             </Button>
             <p className="text-sm text-ink-muted">To send it back to the technician instead, use Return in the actions at the top.</p>
           </div>
-        ) : ticket.status !== 'awaiting_signoff' ? (
+        ) : !isDue ? (
           <p className="text-ink-muted">A supervisor signs the ticket off once the technician submits it.</p>
         ) : role !== 'supervisor' ? (
           <p className="text-ink-muted">Awaiting a supervisor&apos;s sign-off.</p>
