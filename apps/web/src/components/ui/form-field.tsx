@@ -47,15 +47,20 @@ export function FormField({
         ) : null}
         {children}
         <div aria-live="polite">
-          {error ? (
-            <p id={errorId} className="flex items-start gap-1.5 text-base font-medium text-fail">
-              <Icon name="fail" className="mt-0.5 size-5" />
-              <span>{error}</span>
-            </p>
-          ) : null}
+          {error ? <FieldError id={errorId} message={error} /> : null}
         </div>
       </div>
     </FieldContext>
+  );
+}
+
+/** A field's error under it: the fail icon with the words, so it does not rest on colour alone. */
+export function FieldError({ id, message }: { id: string; message: string }) {
+  return (
+    <p id={id} className="flex items-start gap-1.5 text-base font-medium text-fail">
+      <Icon name="fail" className="mt-0.5 size-5" />
+      <span>{message}</span>
+    </p>
   );
 }
 

@@ -1,6 +1,5 @@
 import type { ComponentProps, ReactNode } from 'react';
-import { FormField, Input } from '@/components/ui/form-field';
-import { Icon } from '@/components/ui/icon';
+import { FieldError, FormField, Input } from '@/components/ui/form-field';
 import { cn } from '@/lib/cn';
 
 /**
@@ -102,12 +101,7 @@ export function ChoiceGroup<V extends string | boolean>({
         })}
       </div>
       <div aria-live="polite">
-        {error ? (
-          <p id={errorId} className="flex items-start gap-1.5 text-base font-medium text-fail">
-            <Icon name="fail" className="mt-0.5 size-5" />
-            <span>{error}</span>
-          </p>
-        ) : null}
+        {error ? <FieldError id={errorId} message={error} /> : null}
       </div>
     </fieldset>
   );
