@@ -100,9 +100,10 @@ export function coreFonts(options: { outDir: string; css: string }): Plugin {
         // Same package file, same options: same output, so a rebuild or a dev start reuses it.
         const stamp = createHash('sha256').update(source).update(JSON.stringify([text, keepFeatures, face.weights, subsetFontVersion])).digest('hex');
         const stampFile = `${target}.json`;
+        const kept = existsSync(target) && existsSync(stampFile) ? (JSON.parse(readFileSync(stampFile, 'utf8')) as { stamp: string; range: string }) : null;
         let range: string;
-        if (existsSync(target) && existsSync(stampFile) && (JSON.parse(readFileSync(stampFile, 'utf8')) as { stamp: string }).stamp === stamp) {
-          range = (JSON.parse(readFileSync(stampFile, 'utf8')) as { range: string }).range;
+        if (kept?.stamp === stamp) {
+          range = kept.range;
         } else {
           const sfnt = await subsetFont(source, text, { targetFormat: 'truetype', keepFeatures, variationAxes: { wght: face.weights } });
           range = toUnicodeRange(mappedCodePoints(sfnt));
