@@ -157,6 +157,55 @@ async function main() {
       `  same statement behind a bare node:http server: median ${fmt(rh.median)}; API / bare HTTP = ${(b.median / rh.median).toFixed(2)}× (${load()})`,
     );
 
+    // Like for like: the board route and the same page from one raw statement through the driver, both
+    // behind the API's own stack in one process (tests/load/raw-board-server.ts), asked by the same client
+    // one at a time, alternating, and then under load. This is the ratio that says whether the ORM layer is
+    // the bottleneck; the figures above also count HTTP, the session and gzip on one side only.
+    const harnessPort = await freePort();
+    const harness = await startApi(
+      harnessPort,
+      { DB_NAME: benchDb, UPLOADS_DIR: path.join(root, '.data/uploads-bench') },
+      'tests/load/raw-board-server.ts',
+    );
+    try {
+      const harnessBase = `http://127.0.0.1:${harnessPort}`;
+      const viaHarness = new Client(harnessBase);
+      await viaHarness.signIn('dispatcher@stringfield.test');
+      const rawBoard = board.replace('/api/work-orders', '/api/bench/raw-board');
+      const [ormBody, rawBody] = await Promise.all(
+        [board, rawBoard].map((u) => viaHarness.request('GET', u).then((x) => x.json())),
+      );
+      const same = JSON.stringify(ormBody) === JSON.stringify(rawBody);
+      const ormMs: number[] = [];
+      const rawMs: number[] = [];
+      for (let i = 0; i < 220; i += 1) {
+        for (const [u, into] of [
+          [board, ormMs],
+          [rawBoard, rawMs],
+        ] as const) {
+          const t = performance.now();
+          await viaHarness.request('GET', u).then((x) => x.arrayBuffer());
+          if (i >= 20) into.push(performance.now() - t);
+        }
+      }
+      const o = stats(ormMs);
+      const w = stats(rawMs);
+      say(
+        `  like for like, one process, same stack (session, gzip, zod, JSON), ${o.n} requests each, alternating: board route median ${fmt(o.median)}, raw-statement route ${fmt(w.median)}; ` +
+          `board / raw = ${(o.median / w.median).toFixed(2)}× (target ≤ 1.5×); same response body: ${same ? 'yes' : 'NO'} (${load()})`,
+      );
+      const likeSeconds = Math.min(loadSeconds, 10);
+      const lo = await autocannon({ url: harnessBase + board, connections, duration: likeSeconds, headers: { cookie: viaHarness.cookie } });
+      const lw = await autocannon({ url: harnessBase + rawBoard, connections, duration: likeSeconds, headers: { cookie: viaHarness.cookie } });
+      say(
+        `  like for like under load (${connections} connections, ${likeSeconds} s each): board route ${lo.requests.average.toFixed(0)} req/s, p50 ${lo.latency.p50} ms, p99 ${lo.latency.p99} ms, non-2xx ${lo.non2xx}, errors ${lo.errors}; ` +
+          `raw-statement route ${lw.requests.average.toFixed(0)} req/s, p50 ${lw.latency.p50} ms, p99 ${lw.latency.p99} ms, non-2xx ${lw.non2xx}, errors ${lw.errors}; ` +
+          `raw / board throughput = ${(lw.requests.average / lo.requests.average).toFixed(2)}× (${load()})`,
+      );
+    } finally {
+      harness.kill('SIGTERM');
+    }
+
     // Where the API's time goes: an endpoint with no session, the cheapest signed-in endpoint (session and
     // user, no service), and the board's service call in this process (ORM and queries, no HTTP).
     const health = await time(100, () => fetch(`${base}/api/health`).then((x) => x.arrayBuffer()));

@@ -40,9 +40,9 @@ export function freePort(): Promise<number> {
   });
 }
 
-/** Starts `apps/api/src/server.ts` with `env` on top of this process's and waits for /api/health. */
-export async function startApi(port: number, env: Record<string, string>): Promise<ChildProcess> {
-  const server = spawn(tsx, ['apps/api/src/server.ts'], {
+/** Starts `apps/api/src/server.ts` (or another `script` serving the app) with `env` on top of this process's and waits for /api/health. */
+export async function startApi(port: number, env: Record<string, string>, script = 'apps/api/src/server.ts'): Promise<ChildProcess> {
+  const server = spawn(tsx, [script], {
     cwd: root,
     env: { MALLOC_ARENA_MAX: '2', ...process.env, NODE_ENV: 'production', SESSION_SECRET: 'stringfield-benchmark-session-secret-0123456789', LOG_LEVEL: 'warn', SMTP_URL: 'smtp://127.0.0.1:1', ...env, PORT: String(port) },
     stdio: ['ignore', 'ignore', 'inherit'],
