@@ -6,6 +6,9 @@ import { execFileSync } from 'node:child_process';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Sequelize } from 'sequelize';
+// The API's connector (raw queries need its deletable `meta`, see withDeletableMeta); the instance db.ts
+// also builds never connects here.
+import { connector } from '../../apps/api/src/lib/db.ts';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 export const benchDb = process.env.DB_NAME ?? 'stringfield_bench';
@@ -25,6 +28,7 @@ export async function seedScale(): Promise<Record<string, number>> {
   const started = Date.now();
   const admin = new Sequelize('', process.env.DB_USER ?? 'stringfield', process.env.DB_PASSWORD ?? 'stringfield-local', {
     dialect: 'mariadb',
+    dialectModule: connector,
     host: '127.0.0.1',
     port: Number(process.env.DB_PORT ?? 3307),
     logging: false,
@@ -39,6 +43,7 @@ export async function seedScale(): Promise<Record<string, number>> {
 
   const db = new Sequelize(benchDb, process.env.DB_USER ?? 'stringfield', process.env.DB_PASSWORD ?? 'stringfield-local', {
     dialect: 'mariadb',
+    dialectModule: connector,
     host: '127.0.0.1',
     port: Number(process.env.DB_PORT ?? 3307),
     logging: false,

@@ -18,7 +18,7 @@ export function withDeletableMeta<T>(result: T): T {
 }
 
 /** The connector as Sequelize loads it, its connections answering with `withDeletableMeta`. */
-const connector = {
+export const connector = {
   ...mariadb,
   createConnection: async (config: ConnectionConfig) => {
     const connection = await mariadb.createConnection(config);
