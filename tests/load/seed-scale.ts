@@ -6,9 +6,8 @@ import { execFileSync } from 'node:child_process';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Sequelize } from 'sequelize';
-// The API's connector (raw queries need its deletable `meta`, see withDeletableMeta); the instance db.ts
-// also builds never connects here.
-import { connector } from '../../apps/api/src/lib/db.ts';
+// The API's connector: Sequelize's raw queries need its deletable `meta` (see withDeletableMeta).
+import { connector } from '../../apps/api/src/lib/mariadb-connector.ts';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 export const benchDb = process.env.DB_NAME ?? 'stringfield_bench';

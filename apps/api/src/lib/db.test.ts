@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { withDeletableMeta } from './db.ts';
+import { withDeletableMeta } from './mariadb-connector.ts';
 
 /** Rows as connector 3.1 and later return them: `meta` defined without `configurable`. */
 function connectorRows(): Array<{ id: number }> {
