@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { moduleSpecSchema } from './module-spec.ts';
+import { siteSchema } from './sites.ts';
 
 const text = (label: string, max: number) =>
   z
@@ -75,25 +76,6 @@ export const siteUpdateSchema = z
   })
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
 export type SiteUpdate = z.infer<typeof siteUpdateSchema>;
-
-export const siteSchema = z.object({
-  id: z.number(),
-  name: z.string(),
-  code: z.string(),
-  address: z.string(),
-  timeZone: z.string(),
-  lowestAmbientC: z.number(),
-  highestAmbientC: z.number(),
-  designIrradianceWm2: z.number(),
-  peakSunHours: z.number(),
-  ownerContactEmail: z.string(),
-  ownerUserIds: z.array(z.number()),
-  isArchived: z.boolean(),
-  inverterCount: z.number(),
-  stringCount: z.number(),
-  sizingFailCount: z.number(),
-});
-export type Site = z.infer<typeof siteSchema>;
 
 // ---------- Datasheet libraries ----------
 export const cellTechnologies = ['mono-PERC', 'TOPCon', 'HJT', 'IBC', 'poly', 'other'] as const;
