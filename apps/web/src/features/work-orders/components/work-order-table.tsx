@@ -143,6 +143,7 @@ const baseColumns = [
         dueAt={info.getValue()}
         status={info.row.original.status}
         timeZone={info.row.original.site.timeZone}
+        siteTime={info.row.original.dueAtSiteTime}
         isCompact
       />
     ),
