@@ -1,5 +1,5 @@
 import { expect, test, type Browser, type Page } from '@playwright/test';
-import { demoUsers, screenshotPath, signIn, uniqueSuffix, viewports } from './helpers.ts';
+import { DEMO_PASSWORD, demoUsers, screenshotPath, signIn, uniqueSuffix, viewports } from './helpers.ts';
 
 // Issue 5: a ticket's way from the dispatcher's form to the supervisor's sign-off queue, each role
 // on the device it works on.
@@ -249,4 +249,57 @@ test('the board table fits a 1280 px screen beside the navigation, open tickets 
     expect(box.scroll, `/work-orders${search}`).toBeLessThanOrEqual(box.client);
   }
   await page.context().close();
+});
+
+/**
+ * A first visit of the board on a phone (signed in through the API, nothing of the person kept on the
+ * device yet) whose ticket list answers after `delayMs`; counts the placeholders the list draws.
+ */
+async function firstVisitOfBoard(browser: Browser, baseURL: string | undefined, delayMs: number) {
+  const page = await newPage(browser, baseURL, { viewport: viewports.phone });
+  const { csrfToken } = (await (await page.request.get('/api/auth/csrf')).json()) as { csrfToken: string };
+  const res = await page.request.post('/api/auth/login', {
+    data: { email: demoUsers.dispatcher, password: DEMO_PASSWORD },
+    headers: { 'x-csrf-token': csrfToken },
+  });
+  expect(res.ok()).toBe(true);
+  await page.addInitScript(() => {
+    const drawn = { count: 0 };
+    (window as unknown as { __skeletons: typeof drawn }).__skeletons = drawn;
+    // Only the list's own rows: the start-up frame has placeholders of its own.
+    const isListRow = (el: Element) => el.closest('[role="status"]')?.textContent?.startsWith('Loading work orders') === true;
+    new MutationObserver((records) => {
+      for (const r of records)
+        for (const node of r.addedNodes)
+          if (node instanceof Element)
+            drawn.count += [...(node.matches('.animate-shimmer') ? [node] : []), ...node.querySelectorAll('.animate-shimmer')].filter(isListRow).length;
+    }).observe(document, { subtree: true, childList: true });
+  });
+  await page.route(/\/api\/work-orders\?/, async (route) => {
+    await new Promise((resolve) => setTimeout(resolve, delayMs));
+    await route.continue();
+  });
+  await page.goto('/work-orders');
+  return {
+    page,
+    cards: page.getByRole('list', { name: 'Work orders' }).getByRole('listitem'),
+    skeletonsDrawn: () => page.evaluate(() => (window as unknown as { __skeletons: { count: number } }).__skeletons.count),
+  };
+}
+
+test('a slow board shows its loading rows after a moment, a quick one goes straight to the tickets', async ({ browser, baseURL }) => {
+  // Slow: the list says at once that it is loading, and draws its placeholder rows after a moment.
+  const slow = await firstVisitOfBoard(browser, baseURL, 2_500);
+  await expect(slow.page.getByRole('status').filter({ hasText: 'Loading work orders' })).toBeAttached();
+  await expect(slow.page.locator('main .animate-shimmer').filter({ visible: true }).first()).toBeVisible();
+  await slow.page.screenshot({ path: screenshotPath('work-orders-board-loading-360') });
+  await expect(slow.cards.first()).toBeVisible();
+  expect(await slow.skeletonsDrawn()).toBeGreaterThan(0);
+  await slow.page.context().close();
+
+  // Quick (the answer after 50 ms): straight to the tickets, no placeholder drawn and taken away again.
+  const quick = await firstVisitOfBoard(browser, baseURL, 50);
+  await expect(quick.cards.first()).toBeVisible();
+  expect(await quick.skeletonsDrawn()).toBe(0);
+  await quick.page.context().close();
 });

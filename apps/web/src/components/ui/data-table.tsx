@@ -9,6 +9,7 @@ import {
 } from '@tanstack/react-table';
 import { useLayoutEffect, useRef, type FocusEvent, type ReactNode } from 'react';
 import { cn } from '@/lib/cn';
+import { useAfterDelay } from '@/lib/use-after-delay';
 import { useMediaQuery } from '@/lib/use-media-query';
 import { Icon } from './icon';
 import { LoadingRegion, Skeleton } from './skeleton';
@@ -79,6 +80,12 @@ export function DataTable<T>({
   });
   const isTable = useMediaQuery(tableQuery);
   const { containerRef, onFocus, onBlur } = useFocusAcrossLayouts(isTable);
+  const isSlow = useAfterDelay(isLoading, SKELETON_DELAY_MS);
+
+  if (isLoading && !isSlow) {
+    // Said to screen readers at once; drawn only if the answer takes a while (see SKELETON_DELAY_MS).
+    return <LoadingRegion label={`Loading ${caption.toLowerCase()}`} className="min-h-64">{null}</LoadingRegion>;
+  }
 
   if (isLoading) {
     return (
@@ -218,6 +225,12 @@ export function DataTable<T>({
 
 /** Tailwind's `md:` breakpoint, from which rows are a table rather than cards. */
 const tableQuery = '(min-width: 48rem)';
+/**
+ * How long a list may be loading before its skeleton rows are drawn. Most answers come sooner, and then
+ * the rows appear in one step: drawing 40 placeholders (each starting an animation) and replacing them
+ * a moment later costs a phone a layout of the page and a long task for no information.
+ */
+const SKELETON_DELAY_MS = 300;
 
 /** Where focus was inside the table: the element itself, and how to find its twin in the other layout. */
 type FocusSpot = {
