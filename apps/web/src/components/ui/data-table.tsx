@@ -227,8 +227,8 @@ export function DataTable<T>({
 const tableQuery = '(min-width: 48rem)';
 /**
  * How long a list may be loading before its skeleton rows are drawn. Most answers come sooner, and then
- * the rows appear in one step: drawing 40 placeholders (each starting an animation) and replacing them
- * a moment later costs a phone a layout of the page and a long task for no information.
+ * the rows appear in one step: drawing dozens of placeholders (63 on the board's cards, each starting an
+ * animation) and replacing them a moment later costs a phone a layout of the page for no information.
  */
 const SKELETON_DELAY_MS = 300;
 

@@ -13,8 +13,9 @@ const stateClasses: Record<SlaState, string> = {
 
 /**
  * The live repair deadline: "due in 3 h 12 min" / "overdue by 40 min", with the absolute time in the
- * site's zone (`siteTime` when the API has formatted it, as for listed tickets; otherwise made here). It is a timer (not a live region) so screen readers are not interrupted every tick;
- * its accessible name says it all in words when someone reaches it.
+ * site's zone (`siteTime` when the API has formatted it, as for listed tickets; otherwise made here).
+ * It is a timer (not a live region) so screen readers are not interrupted every tick; its accessible
+ * name says it all in words when someone reaches it.
  */
 export function SlaClock({
   dueAt,
