@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { moduleSpecSchema } from './module-spec.ts';
-import { siteSchema } from './sites.ts';
+import { cellTechnologies } from './asset-records.ts';
 
 const text = (label: string, max: number) =>
   z
@@ -78,7 +78,6 @@ export const siteUpdateSchema = z
 export type SiteUpdate = z.infer<typeof siteUpdateSchema>;
 
 // ---------- Datasheet libraries ----------
-export const cellTechnologies = ['mono-PERC', 'TOPCon', 'HJT', 'IBC', 'poly', 'other'] as const;
 
 export const moduleModelInputSchema = z
   .object({
@@ -88,27 +87,6 @@ export const moduleModelInputSchema = z
   })
   .and(moduleSpecSchema);
 export type ModuleModelInput = z.infer<typeof moduleModelInputSchema>;
-
-export const moduleModelSchema = z.object({
-  id: z.number(),
-  maker: z.string(),
-  model: z.string(),
-  cellTechnology: z.enum(cellTechnologies),
-  pmaxW: z.number(),
-  vocV: z.number(),
-  iscA: z.number(),
-  vmpV: z.number(),
-  impA: z.number(),
-  alphaIscPctPerC: z.number(),
-  betaVocPctPerC: z.number(),
-  gammaPmaxPctPerC: z.number(),
-  cellsInSeries: z.number(),
-  bypassDiodes: z.number(),
-  noctC: z.number().nullable(),
-  isArchived: z.boolean(),
-  stringCount: z.number(),
-});
-export type ModuleModel = z.infer<typeof moduleModelSchema>;
 
 export const inverterModelInputSchema = z
   .object({
@@ -136,24 +114,6 @@ export const inverterModelInputSchema = z
   });
 export type InverterModelInput = z.infer<typeof inverterModelInputSchema>;
 
-export const inverterModelSchema = z.object({
-  id: z.number(),
-  maker: z.string(),
-  model: z.string(),
-  maxDcV: z.number(),
-  mpptMinV: z.number(),
-  mpptMaxV: z.number(),
-  startV: z.number(),
-  mpptInputs: z.number(),
-  maxInputA: z.number(),
-  maxInputIscA: z.number(),
-  ratedAcW: z.number(),
-  maxDcW: z.number(),
-  isArchived: z.boolean(),
-  inverterCount: z.number(),
-});
-export type InverterModel = z.infer<typeof inverterModelSchema>;
-
 // ---------- Plant equipment ----------
 export const inverterInputSchema = z.object({
   siteId: z.number().int().positive(),
@@ -163,35 +123,12 @@ export const inverterInputSchema = z.object({
 });
 export type InverterInput = z.infer<typeof inverterInputSchema>;
 
-export const inverterSchema = z.object({
-  id: z.number(),
-  siteId: z.number(),
-  tag: z.string(),
-  serial: z.string(),
-  inverterModelId: z.number(),
-  inverterModel: z.string(),
-  mpptInputs: z.number(),
-  isArchived: z.boolean(),
-  stringCount: z.number(),
-});
-export type Inverter = z.infer<typeof inverterSchema>;
-
 export const combinerBoxInputSchema = z.object({
   siteId: z.number().int().positive(),
   tag: tagSchema('Combiner box tag'),
   fuseRatingA: num('Fuse rating', 'A', 1, 100).nullable().default(null),
 });
 export type CombinerBoxInput = z.infer<typeof combinerBoxInputSchema>;
-
-export const combinerBoxSchema = z.object({
-  id: z.number(),
-  siteId: z.number(),
-  tag: z.string(),
-  fuseRatingA: z.number().nullable(),
-  isArchived: z.boolean(),
-  stringCount: z.number(),
-});
-export type CombinerBox = z.infer<typeof combinerBoxSchema>;
 
 export const pvStringInputSchema = z.object({
   label: tagSchema('String label'),
@@ -210,39 +147,6 @@ export const pvStringUpdateSchema = pvStringInputSchema
   .partial()
   .extend({ isArchived: z.boolean().optional() })
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
-
-/** One named string-sizing check as the API hands it out. */
-export const sizingCheckSchema = z.object({
-  code: z.string(),
-  label: z.string(),
-  ok: z.boolean(),
-  value: z.number(),
-  limit: z.number(),
-  unit: z.string(),
-  message: z.string(),
-});
-export type SizingCheck = z.infer<typeof sizingCheckSchema>;
-
-export const pvStringSchema = z.object({
-  id: z.number(),
-  siteId: z.number(),
-  label: z.string(),
-  inverterId: z.number(),
-  inverterTag: z.string(),
-  mpptInput: z.number(),
-  combinerBoxId: z.number().nullable(),
-  combinerTag: z.string().nullable(),
-  combinerPosition: z.number().nullable(),
-  moduleModelId: z.number(),
-  moduleModel: z.string(),
-  modulesInSeries: z.number(),
-  stringsInParallel: z.number(),
-  commissionedOn: z.string().nullable(),
-  notes: z.string(),
-  isArchived: z.boolean(),
-  sizingFailures: z.array(z.string()),
-});
-export type PvString = z.infer<typeof pvStringSchema>;
 
 export const listQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),
@@ -292,22 +196,6 @@ export const importPreviewSchema = z.object({
   rows: z.array(importRowSchema),
 });
 export type ImportPreview = z.infer<typeof importPreviewSchema>;
-
-export const pvStringDetailSchema = pvStringSchema.extend({
-  site: siteSchema.pick({
-    id: true,
-    name: true,
-    code: true,
-    timeZone: true,
-    lowestAmbientC: true,
-    highestAmbientC: true,
-    designIrradianceWm2: true,
-  }),
-  module: moduleModelSchema,
-  inverter: z.object({ id: z.number(), tag: z.string(), serial: z.string(), model: inverterModelSchema }),
-  sizing: z.array(sizingCheckSchema),
-});
-export type PvStringDetail = z.infer<typeof pvStringDetailSchema>;
 
 /** Words shown for each string-sizing check of packages/pv. */
 export const sizingCheckLabels: Record<string, string> = {

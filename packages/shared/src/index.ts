@@ -6,7 +6,7 @@ export * from './auth.ts';
 export * from './mail.ts';
 export * from './health.ts';
 export * from './module-spec.ts';
-export * from './sites.ts';
+export * from './asset-records.ts';
 export * from './assets.ts';
 export * from './work-orders.ts';
 export * from './field-checks.ts';
