@@ -121,33 +121,3 @@ test('a board drawn from the kept copy before the server has said who is signed 
   }
 });
 
-
-// The first date formatter a page makes loads the browser's locale data: 30–45 ms of one task on the
-// development machine, several times that on a phone. The API sends each listed deadline as the site's
-// clock shows it (`dueAtSiteTime`), so drawing the board makes none (fails when the deadline cell formats
-// the time itself, as it did before).
-test('the board draws its deadlines without making a date formatter', async ({ page }) => {
-  await signInFirstVisit(page, demoUsers.dispatcher);
-  await page.addInitScript(() => {
-    const counter = { made: 0 };
-    (window as unknown as { __dateFormats: typeof counter }).__dateFormats = counter;
-    const Original = Intl.DateTimeFormat;
-    Intl.DateTimeFormat = new Proxy(Original, {
-      construct(target, args) {
-        counter.made += 1;
-        return Reflect.construct(target, args) as object;
-      },
-      apply(target, thisArg, args) {
-        counter.made += 1;
-        return Reflect.apply(target, thisArg, args) as unknown;
-      },
-    });
-  });
-  await page.goto('/work-orders');
-  const cards = page.getByRole('list', { name: 'Work orders' }).getByRole('listitem');
-  await expect(cards.first()).toBeVisible();
-  // The deadline as the site's clock shows it, zone named (demo sites: Berlin, Vienna, Edmonton).
-  await expect(cards.first().getByRole('timer')).toHaveAccessibleName(/\d{2}:\d{2} (CES?T|GMT[+-]\d+), site time$/);
-  await page.waitForLoadState('networkidle');
-  expect(await page.evaluate(() => (window as unknown as { __dateFormats: { made: number } }).__dateFormats.made)).toBe(0);
-});

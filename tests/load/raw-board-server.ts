@@ -6,7 +6,7 @@
 // Never part of the product: server.ts does not know this file.
 import type { Express, Request, Response } from 'express';
 import mariadb, { type Pool } from 'mariadb';
-import { DUE_SOON_HOURS, formatSiteTime, openStatuses, pageQuerySchema, priorities as allPriorities, workOrderListQuerySchema } from '@stringfield/shared';
+import { DUE_SOON_HOURS, openStatuses, pageQuerySchema, priorities as allPriorities, workOrderListQuerySchema } from '@stringfield/shared';
 import { createApp } from '../../apps/api/src/app.ts';
 import { env } from '../../apps/api/src/config/env.ts';
 import { notFoundApi } from '../../apps/api/src/middleware/error-handler.ts';
@@ -76,7 +76,6 @@ export function createRawBoardApp(pool: Pool): Express {
           assignee: r.assignee_id === null ? null : { id: r.assignee_id, name: r.assignee ?? '' },
           reportedAt: r.reported_at.toISOString(),
           dueAt: r.due_at.toISOString(),
-          dueAtSiteTime: formatSiteTime(r.due_at.toISOString(), r.time_zone),
           isOverdue: isOpen && due < now,
           isDueSoon: isOpen && due >= now && due - now <= DUE_SOON_HOURS * 3_600_000,
           stringCount: labels.length,

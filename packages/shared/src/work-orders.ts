@@ -189,8 +189,6 @@ export const workOrderListItemSchema = z.object({
   assignee: z.object({ id: z.number(), name: z.string() }).nullable(),
   reportedAt: z.string(),
   dueAt: z.string(),
-  /** The deadline as the site's clock shows it (`formatSiteTime`, made by the API). */
-  dueAtSiteTime: z.string(),
   isOverdue: z.boolean(),
   isDueSoon: z.boolean(),
   stringCount: z.number(),

@@ -37,7 +37,7 @@ function WorkCard({ item, isLate }: { item: WorkOrderListItem; isLate: boolean }
           </span>
         </span>
         <span className="flex items-center justify-between gap-3 border-t border-line pt-2">
-          <SlaClock dueAt={item.dueAt} status={item.status} timeZone={item.site.timeZone} siteTime={item.dueAtSiteTime} />
+          <SlaClock dueAt={item.dueAt} status={item.status} timeZone={item.site.timeZone} />
           <Icon name="chevronRight" className="size-6 text-brand" />
         </span>
       </Link>

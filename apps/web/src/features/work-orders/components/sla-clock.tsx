@@ -13,15 +13,13 @@ const stateClasses: Record<SlaState, string> = {
 
 /**
  * The live repair deadline: "due in 3 h 12 min" / "overdue by 40 min", with the absolute time in the
- * site's zone (`siteTime` when the API has formatted it, as for listed tickets; otherwise made here).
- * It is a timer (not a live region) so screen readers are not interrupted every tick; its accessible
- * name says it all in words when someone reaches it.
+ * site's zone. It is a timer (not a live region) so screen readers are not interrupted every tick;
+ * its accessible name says it all in words when someone reaches it.
  */
 export function SlaClock({
   dueAt,
   status,
   timeZone,
-  siteTime,
   size = 'md',
   showAbsolute = true,
   canWrap = false,
@@ -31,8 +29,6 @@ export function SlaClock({
   dueAt: string;
   status: WorkOrderStatus;
   timeZone: string;
-  /** The deadline as the site's clock shows it, from the API (a list item's `dueAtSiteTime`). */
-  siteTime?: string;
   size?: 'md' | 'lg';
   showAbsolute?: boolean;
   /** Let the words wrap (narrow table columns); otherwise each line stays whole. */
@@ -43,8 +39,7 @@ export function SlaClock({
 }) {
   const now = useNow();
   const countdown = slaCountdown(dueAt, status, now);
-  // A copy kept on the device from before the API sent the text has none: made here then.
-  const absolute = siteTime || formatSiteTime(dueAt, timeZone);
+  const absolute = formatSiteTime(dueAt, timeZone);
   const label =
     countdown.state === 'stopped'
       ? `Deadline: ${countdown.spokenText}; it was ${absolute}, site time`

@@ -143,7 +143,6 @@ const baseColumns = [
         dueAt={info.getValue()}
         status={info.row.original.status}
         timeZone={info.row.original.site.timeZone}
-        siteTime={info.row.original.dueAtSiteTime}
         isCompact
       />
     ),

@@ -251,7 +251,7 @@ export function WorkOrderView({
         <div className="grid gap-4 sm:grid-cols-2">
           <div>
             <p className="text-sm text-ink-muted">Deadline</p>
-            <SlaClock dueAt={ticket.dueAt} status={ticket.status} timeZone={tz} siteTime={ticket.dueAtSiteTime} size="lg" />
+            <SlaClock dueAt={ticket.dueAt} status={ticket.status} timeZone={tz} size="lg" />
           </div>
           <div>
             <p className="text-sm text-ink-muted">Technician</p>

@@ -14,7 +14,6 @@ function buildTicket(overrides: Partial<WorkOrderListItem> = {}): WorkOrderListI
     assignee: { id: 3, name: 'Demo Technician' },
     reportedAt: '2025-10-14T06:00:00.000Z',
     dueAt: '2025-10-14T12:00:00.000Z',
-    dueAtSiteTime: 'Tue 14 Oct, 14:00 CEST',
     isOverdue: false,
     isDueSoon: false,
     stringCount: 1,

@@ -63,8 +63,44 @@ export function slaCountdown(dueAt: string, status: WorkOrderStatus, nowMs: numb
   };
 }
 
-// A moment as the site's clock shows it lives in the shared package: the API formats list deadlines with it too.
-export { formatSiteTime } from '@stringfield/shared';
+// Formatters by locale, zone and options. Making an Intl.DateTimeFormat costs far more than using one,
+// and a board renders a deadline per row (25 rows, a handful of zones).
+const siteTimeFormats = new Map<string, Intl.DateTimeFormat>();
+
+/**
+ * A moment as the site's clock shows it, e.g. `Tue 14 Oct, 15:30 CEST`. Plants are worked in local
+ * time, so deadlines and history read in the site's zone, with the zone named.
+ */
+export function formatSiteTime(
+  iso: string,
+  timeZone: string,
+  options: { withWeekday?: boolean; withYear?: boolean; locale?: string } = {},
+): string {
+  const { withWeekday = true, withYear = false, locale = 'en-GB' } = options;
+  const date = new Date(iso);
+  if (Number.isNaN(date.getTime())) return iso;
+  try {
+    const key = `${locale}|${timeZone}|${withWeekday}|${withYear}`;
+    let format = siteTimeFormats.get(key);
+    if (!format) {
+      format = new Intl.DateTimeFormat(locale, {
+        timeZone,
+        weekday: withWeekday ? 'short' : undefined,
+        day: 'numeric',
+        month: 'short',
+        year: withYear ? 'numeric' : undefined,
+        hour: '2-digit',
+        minute: '2-digit',
+        hourCycle: 'h23',
+        timeZoneName: 'short',
+      });
+      siteTimeFormats.set(key, format);
+    }
+    return format.format(date);
+  } catch {
+    return date.toISOString();
+  }
+}
 
 /** The calendar day (`2025-10-14`) a moment falls on at the site. */
 export function siteDayKey(at: Date | string, timeZone: string): string {
