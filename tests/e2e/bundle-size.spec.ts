@@ -102,3 +102,25 @@ for (const [page, route] of [
     }
   });
 }
+
+// Over HTTP/1.1 a phone fetches six files at a time from one server, and each file costs at least a round
+// trip on a mobile network however small it is. The first pages' code used to arrive in 19 (field page)
+// to 26 (board) files, a dozen of them under a kilobyte (one API call's module, a key list, a badge); the
+// build now groups the tickets' common modules and the app's start-up modules (vite.config.ts).
+const MAX_FIRST_PAGE_SCRIPTS = 12;
+for (const [page, route] of [
+  ['board', 'src/app/routes/work-orders.tsx'],
+  ['field page', fieldRoute],
+  ['home page', 'src/app/routes/home.tsx'],
+] as const) {
+  test(`the ${page}’s first load needs at most ${MAX_FIRST_PAGE_SCRIPTS} script files`, () => {
+    const manifest = JSON.parse(fs.readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8')) as Manifest;
+    const entry = Object.keys(manifest).find((key) => manifest[key]!.isEntry)!;
+    const scripts = filesOf(
+      manifest,
+      new Set([...staticClosure(manifest, entry), ...staticClosure(manifest, appStart), ...staticClosure(manifest, route)]),
+    ).filter((file) => file.endsWith('.js'));
+    console.log(`${page}: ${scripts.length} script files: ${scripts.join(', ')}`);
+    expect(scripts.length, `script files of the ${page}'s first load`).toBeLessThanOrEqual(MAX_FIRST_PAGE_SCRIPTS);
+  });
+}
