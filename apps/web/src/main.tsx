@@ -7,14 +7,15 @@ import { startMeEarly } from '@/features/auth/api/get-me';
 import { afterPageSettles } from '@/lib/after-load';
 import { toast } from '@/lib/toast';
 import { registerSW } from 'virtual:pwa-register';
-import { preloadFirstPage } from './app/first-page';
+import { prepareFirstPage, preloadFirstPage } from './app/first-page';
 import { showStartFailure } from './app/start-failure';
 
 // The static frame in index.html is on screen already. Starting the app is split into a few short
-// tasks rather than one long one (who is signed in, the first page's code, React, the app's modules,
-// the router, then the first render, which React slices itself), so a phone's main thread is never
-// held for long and a tap is answered in between. The app's own code is already downloading
-// (modulepreload in index.html, see vite.config.ts); the page's code starts in the second task.
+// tasks rather than one long one (who is signed in, the first page's code, the browser's locale data
+// for a page that formats dates as it draws, React, the app's modules, the router, then the first
+// render, which React slices itself), so a phone's main thread is never held for long and a tap is
+// answered in between. The app's own code is already downloading (modulepreload in index.html, see
+// vite.config.ts); the page's code starts in the second task.
 // Should one of those downloads fail (a file gone after a release, the connection dropping), the
 // loading frame says so and offers a reload instead of waiting forever.
 startMeEarly();
@@ -24,6 +25,8 @@ start().catch((error: unknown) => showStartFailure(error, { isReactRendering }))
 async function start() {
   await nextTask();
   preloadFirstPage(window.location);
+  await nextTask();
+  prepareFirstPage(window.location);
   await nextTask();
   const { createRoot } = await import('react-dom/client');
   const container = document.getElementById('root');

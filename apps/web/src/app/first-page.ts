@@ -1,6 +1,7 @@
 import type { SessionUser } from '@stringfield/shared';
 import { authKeys } from '@/features/auth/api/keys';
 import { peekEarly } from '@/lib/early-answers';
+import { warmUpIntl } from '@/lib/warm-up-intl';
 
 /** Where the first page was opened: the path and the query string. */
 export type FirstLocation = { pathname: string; search: string };
@@ -25,6 +26,9 @@ const firstPages: ReadonlyArray<readonly [RegExp, () => Promise<object>]> = [
   [/^\/work-orders\/[^/]+\/field\/?$/, () => import('./routes/field-checks')],
 ];
 
+/** First pages whose first render formats dates or numbers (deadlines, readings): see lib/warm-up-intl. */
+const formatsInFirstRender = [/^\/$/, /^\/work-orders\/?$/, /^\/work-orders\/[^/]+\/field\/?$/];
+
 export function preloadFirstPage(location: FirstLocation): void {
   const page = firstPages.find(([pattern]) => pattern.test(location.pathname));
   if (!page) return;
@@ -36,4 +40,12 @@ export function preloadFirstPage(location: FirstLocation): void {
       if (user) (module as FirstPageModule).startFirstAnswers?.(user, location);
     })
     .catch(() => undefined);
+}
+
+/**
+ * For a first page that formats dates or numbers as it draws: the browser's locale data, loaded now (its
+ * own task, in main.tsx's start-up) rather than in the middle of that page's first render.
+ */
+export function prepareFirstPage(location: FirstLocation): void {
+  if (formatsInFirstRender.some((pattern) => pattern.test(location.pathname))) warmUpIntl();
 }
