@@ -3,32 +3,35 @@ import '@fontsource-variable/inter';
 import '@fontsource-variable/space-grotesk';
 import './fonts.css';
 import './styles.css';
-import { startMeEarly } from '@/features/auth/api/get-me';
 import { afterPageSettles } from '@/lib/after-load';
 import { toast } from '@/lib/toast';
 import { registerSW } from 'virtual:pwa-register';
-import { prepareFirstPage, preloadFirstPage } from './app/first-page';
+import { nextTask, prepareFirstPage, preloadFirstPage } from './app/first-page';
 import { showStartFailure } from './app/start-failure';
 
-// The static frame in index.html is on screen already. Starting the app is split into a few short
-// tasks rather than one long one (who is signed in, the first page's code, the browser's locale data
-// for a page that formats dates as it draws, React, the app's modules, the router, then the first
-// render, which React slices itself), so a phone's main thread is never held for long and a tap is
-// answered in between. The app's own code is already downloading (modulepreload in index.html, see
-// vite.config.ts); the page's code starts in the second task.
+// The static frame in index.html is on screen already. Starting the app is split into short tasks
+// rather than one long one, so a phone's main thread is never held for long and a tap is answered in
+// between: this file has no import of React or zod, and each step builds one piece (React, its DOM
+// renderer and the router, which are one file; then zod, the design system and who is signed in; the
+// first page's code; the browser's locale data for a page that formats dates as it draws; the app's
+// modules; the router; then the first render, which React slices itself). Their files are already
+// downloading (modulepreload in index.html, see vite.config.ts), as is the answer to who is signed in
+// (a preload the API adds to the HTML, apps/api/src/lib/web-shell.ts).
 // Should one of those downloads fail (a file gone after a release, the connection dropping), the
 // loading frame says so and offers a reload instead of waiting forever.
-startMeEarly();
 let isReactRendering = false;
 start().catch((error: unknown) => showStartFailure(error, { isReactRendering }));
 
 async function start() {
+  const { createRoot } = await import('react-dom/client');
+  await nextTask();
+  const { startMeEarly } = await import('@/features/auth/api/get-me');
+  startMeEarly();
   await nextTask();
   preloadFirstPage(window.location);
   await nextTask();
   prepareFirstPage(window.location);
   await nextTask();
-  const { createRoot } = await import('react-dom/client');
   const container = document.getElementById('root');
   if (!container) throw new Error('The page has no #root element');
   const root = createRoot(container);
@@ -39,11 +42,6 @@ async function start() {
   await nextTask();
   isReactRendering = true;
   renderApp(root, router);
-}
-
-/** Resolves in a new task, so the browser may paint and handle input first. */
-function nextTask(): Promise<void> {
-  return new Promise((resolve) => setTimeout(resolve, 0));
 }
 
 // The service worker exists only in a production build. A new release takes over at once; the page

@@ -11,12 +11,12 @@ type FirstPage = { pattern: string; files: string[] };
 /** Built assets carry their content's hash in their name: a browser may keep them for good. */
 export const IMMUTABLE_ASSET = 'public, max-age=31536000, immutable';
 
-type Shell = { mtimeMs: number; plain: string; pages: Array<{ pattern: RegExp; html: string }> };
+type Shell = { mtimeMs: number; other: string; pages: Array<{ pattern: RegExp; html: string }> };
 
 /**
- * The web app's HTML for an address. For a first page it also lists that page's scripts and the session
- * lookup as preloads, so a phone fetches them with the app's own script instead of a round trip after it
- * has run. Read again whenever the build changes it.
+ * The web app's HTML for an address, with the session lookup as a preload. For a first page it also lists
+ * that page's scripts as preloads, so a phone fetches them with the app's own script instead of a round
+ * trip after it has run. Read again whenever the build changes it.
  */
 export function webShell(webDist: string): RequestHandler {
   const indexFile = path.join(webDist, 'index.html');
@@ -39,17 +39,22 @@ export function webShell(webDist: string): RequestHandler {
       const links = files
         .filter((file) => /^assets\/[\w.-]+\.js$/.test(file) && !plain.includes(`/${file}"`))
         .map((file) => `<link rel="modulepreload" crossorigin fetchpriority="low" href="/${file}">`);
-      // The app asks who is signed in before anything else; same URL, mode and credentials as its fetch.
+      // The app asks who is signed in before anything else, on every page, but only once its start-up code
+      // has run (main.tsx); same URL, mode and credentials as its fetch, so the answer is on its way meanwhile.
       links.push('<link rel="preload" as="fetch" crossorigin href="/api/auth/me">');
       return plain.replace('</head>', `${links.join('')}</head>`);
     };
-    shell = { mtimeMs, plain, pages: firstPages.map((p) => ({ pattern: new RegExp(p.pattern), html: withPreloads(p.files) })) };
+    shell = {
+      mtimeMs,
+      other: firstPages.length > 0 ? withPreloads([]) : plain,
+      pages: firstPages.map((p) => ({ pattern: new RegExp(p.pattern), html: withPreloads(p.files) })),
+    };
     return shell;
   };
   return (req, res) => {
-    const { plain, pages } = load();
+    const { other, pages } = load();
     res.setHeader('Cache-Control', 'no-cache');
-    res.type('html').send(pages.find((p) => p.pattern.test(req.path))?.html ?? plain);
+    res.type('html').send(pages.find((p) => p.pattern.test(req.path))?.html ?? other);
   };
 }
 

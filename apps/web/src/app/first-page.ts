@@ -26,17 +26,35 @@ const firstPages: ReadonlyArray<readonly [RegExp, () => Promise<object>]> = [
   [/^\/work-orders\/[^/]+\/field\/?$/, () => import('./routes/field-checks')],
 ];
 
-/** First pages whose first render formats dates or numbers (deadlines, readings): see lib/warm-up-intl. */
-const formatsInFirstRender = [/^\/$/, /^\/work-orders\/?$/, /^\/work-orders\/[^/]+\/field\/?$/];
+/**
+ * First pages that draw tickets: their first render formats dates and numbers (deadlines, readings; see
+ * lib/warm-up-intl), and their code builds on the tickets' common modules (records, keys, deadlines: the
+ * `tickets` chunk of vite.config.ts).
+ */
+const drawsTickets = [/^\/$/, /^\/work-orders\/?$/, /^\/work-orders\/[^/]+\/field\/?$/];
 
+/** Resolves in a new task, so the browser may paint and handle input first. */
+export function nextTask(): Promise<void> {
+  return new Promise((resolve) => setTimeout(resolve, 0));
+}
+
+/**
+ * Starts loading the first page's code, and asks for its data (`startFirstAnswers`) once the code and the
+ * signed-in person are there. Building a page's modules is start-up's longest piece of script, so it is cut
+ * in tasks of its own: the tickets' common modules first, then the page's own, then the requests.
+ */
 export function preloadFirstPage(location: FirstLocation): void {
   const page = firstPages.find(([pattern]) => pattern.test(location.pathname));
   if (!page) return;
   const me = peekEarly<SessionUser | null>(authKeys.me()) ?? Promise.resolve(null);
+  const common = drawsTickets.some((pattern) => pattern.test(location.pathname))
+    ? import('@/features/work-orders/api/keys').then(nextTask)
+    : Promise.resolve();
   // A failed download is reported by the router, which asks for the same module; a failed answer by
   // the query that takes it over.
-  Promise.all([page[1](), me])
-    .then(([module, user]) => {
+  Promise.all([common.then(page[1]), me])
+    .then(async ([module, user]) => {
+      await nextTask();
       if (user) (module as FirstPageModule).startFirstAnswers?.(user, location);
     })
     .catch(() => undefined);
@@ -47,5 +65,5 @@ export function preloadFirstPage(location: FirstLocation): void {
  * own task, in main.tsx's start-up) rather than in the middle of that page's first render.
  */
 export function prepareFirstPage(location: FirstLocation): void {
-  if (formatsInFirstRender.some((pattern) => pattern.test(location.pathname))) warmUpIntl();
+  if (drawsTickets.some((pattern) => pattern.test(location.pathname))) warmUpIntl();
 }
