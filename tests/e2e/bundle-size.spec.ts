@@ -133,3 +133,11 @@ for (const [page, route] of [
     expect(scripts.length, `script files of the ${page}'s first load`).toBeLessThanOrEqual(MAX_FIRST_PAGE_SCRIPTS);
   });
 }
+
+// main.tsx starts the app in short tasks, one piece built in each (see there). That holds only while the
+// entry script imports nothing itself: a static import would be built with the entry, in its task.
+test('the entry script imports no other file: React and zod are built in start-up tasks of their own', () => {
+  const manifest = JSON.parse(fs.readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8')) as Manifest;
+  const entry = Object.keys(manifest).find((key) => manifest[key]!.isEntry)!;
+  expect(manifest[entry]!.imports ?? [], 'static imports of the entry').toEqual([]);
+});
