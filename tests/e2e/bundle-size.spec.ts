@@ -43,6 +43,17 @@ function filesOf(manifest: Manifest, keys: Iterable<string>): string[] {
   return [...files];
 }
 
+const readManifest = () => JSON.parse(fs.readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8')) as Manifest;
+
+/** The script files a first page of `route` loads before it can draw: the entry, the app's start-up and the route, each with its static imports. */
+function firstLoadScripts(manifest: Manifest, route: string): string[] {
+  const entry = Object.keys(manifest).find((key) => manifest[key]!.isEntry)!;
+  return filesOf(
+    manifest,
+    new Set([...staticClosure(manifest, entry), ...staticClosure(manifest, appStart), ...staticClosure(manifest, route)]),
+  ).filter((file) => file.endsWith('.js'));
+}
+
 const gzipBytes = (file: string) => zlib.gzipSync(fs.readFileSync(path.join(dist, file)), { level: 9 }).length;
 const kb = (bytes: number) => Math.round((bytes / 1024) * 10) / 10;
 
@@ -97,12 +108,8 @@ for (const [page, route] of [
   ['field page', fieldRoute],
 ] as const) {
   test(`the ${page}’s code holds none of the forms’ input schemas`, () => {
-    const manifest = JSON.parse(fs.readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8')) as Manifest;
-    const entry = Object.keys(manifest).find((key) => manifest[key]!.isEntry)!;
-    const pageFiles = filesOf(
-      manifest,
-      new Set([...staticClosure(manifest, entry), ...staticClosure(manifest, appStart), ...staticClosure(manifest, route)]),
-    ).filter((file) => file.endsWith('.js'));
+    const manifest = readManifest();
+    const pageFiles = firstLoadScripts(manifest, route);
     const read = (file: string) => fs.readFileSync(path.join(dist, file), 'utf8');
     const allFiles = Object.values(manifest).map((chunk) => chunk.file).filter((file) => file.endsWith('.js'));
     for (const marker of formSchemaMarkers) {
@@ -123,12 +130,7 @@ for (const [page, route] of [
   ['home page', 'src/app/routes/home.tsx'],
 ] as const) {
   test(`the ${page}’s first load needs at most ${MAX_FIRST_PAGE_SCRIPTS} script files`, () => {
-    const manifest = JSON.parse(fs.readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8')) as Manifest;
-    const entry = Object.keys(manifest).find((key) => manifest[key]!.isEntry)!;
-    const scripts = filesOf(
-      manifest,
-      new Set([...staticClosure(manifest, entry), ...staticClosure(manifest, appStart), ...staticClosure(manifest, route)]),
-    ).filter((file) => file.endsWith('.js'));
+    const scripts = firstLoadScripts(readManifest(), route);
     console.log(`${page}: ${scripts.length} script files: ${scripts.join(', ')}`);
     expect(scripts.length, `script files of the ${page}'s first load`).toBeLessThanOrEqual(MAX_FIRST_PAGE_SCRIPTS);
   });
@@ -137,7 +139,7 @@ for (const [page, route] of [
 // main.tsx starts the app in short tasks, one piece built in each (see there). That holds only while the
 // entry script imports nothing itself: a static import would be built with the entry, in its task.
 test('the entry script imports no other file: React and zod are built in start-up tasks of their own', () => {
-  const manifest = JSON.parse(fs.readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8')) as Manifest;
+  const manifest = readManifest();
   const entry = Object.keys(manifest).find((key) => manifest[key]!.isEntry)!;
   expect(manifest[entry]!.imports ?? [], 'static imports of the entry').toEqual([]);
 });
