@@ -227,6 +227,8 @@ export default defineConfig({
             // The design system and the app's small shared helpers in one file: a route otherwise
             // waits on a dozen 1–2 KB files, each a round trip on a phone's connection.
             { name: 'ui', test: uiModules, priority: 10 },
+            // Only the modules listed: with their dependencies the group would also take TanStack's query
+            // core and the early answers, which the app's start-up needs on every page, sign-in included.
             { name: 'tickets', test: ticketModules, priority: 5, includeDependenciesRecursively: false },
           ],
         },

@@ -3,10 +3,10 @@ import '@fontsource-variable/inter';
 import '@fontsource-variable/space-grotesk';
 import './fonts.css';
 import './styles.css';
-import { afterPageSettles } from '@/lib/after-load';
+import { afterPageSettles, nextTask } from '@/lib/after-load';
 import { toast } from '@/lib/toast';
 import { registerSW } from 'virtual:pwa-register';
-import { nextTask, prepareFirstPage, preloadFirstPage } from './app/first-page';
+import { prepareFirstPage, preloadFirstPage } from './app/first-page';
 import { showStartFailure } from './app/start-failure';
 
 // The static frame in index.html is on screen already. Starting the app is split into short tasks

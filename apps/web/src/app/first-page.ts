@@ -1,5 +1,6 @@
 import type { SessionUser } from '@stringfield/shared';
 import { authKeys } from '@/features/auth/api/keys';
+import { nextTask } from '@/lib/after-load';
 import { peekEarly } from '@/lib/early-answers';
 import { warmUpIntl } from '@/lib/warm-up-intl';
 
@@ -32,11 +33,6 @@ const firstPages: ReadonlyArray<readonly [RegExp, () => Promise<object>]> = [
  * `tickets` chunk of vite.config.ts).
  */
 const drawsTickets = [/^\/$/, /^\/work-orders\/?$/, /^\/work-orders\/[^/]+\/field\/?$/];
-
-/** Resolves in a new task, so the browser may paint and handle input first. */
-export function nextTask(): Promise<void> {
-  return new Promise((resolve) => setTimeout(resolve, 0));
-}
 
 /**
  * Starts loading the first page's code, and asks for its data (`startFirstAnswers`) once the code and the

@@ -22,3 +22,8 @@ export function afterPageSettles(run: () => void, delayMs: number): () => void {
     window.removeEventListener('load', wait);
   };
 }
+
+/** Resolves in a new task, so the browser may paint and handle input first (the start-up's steps, main.tsx). */
+export function nextTask(): Promise<void> {
+  return new Promise((resolve) => setTimeout(resolve, 0));
+}
